@@ -17,7 +17,9 @@
 #include <cstdint>
 #include <functional>
 #include <optional>
+#include <span>
 #include <string>
+#include <utility>
 
 #include "fourplat/fraction.hpp"
 #include "fourplat/integer.hpp"
@@ -68,6 +70,8 @@ class TwoBridgeLink {
   friend bool operator==(const TwoBridgeLink&, const TwoBridgeLink&) = default;
 
  private:
+  struct Normalized {};
+  TwoBridgeLink(Integer p, Integer q, Normalized) : p_(std::move(p)), q_(std::move(q)) {}
   Integer p_;
   Integer q_;
 };
@@ -95,6 +99,8 @@ class OrientedTwoBridgeLink {
   friend bool operator==(const OrientedTwoBridgeLink&, const OrientedTwoBridgeLink&) = default;
 
  private:
+  struct Normalized {};
+  OrientedTwoBridgeLink(Integer p, Integer q, Normalized) : p_(std::move(p)), q_(std::move(q)) {}
   Integer p_;
   Integer q_;
 };
@@ -126,11 +132,32 @@ struct LinkSummaryWord {
   LinkKind kind = LinkKind::unknot;
 };
 
-/// The summary of N(p/q) computed in machine words without allocation, or nullopt when an
-/// intermediate would overflow (then use TwoBridgeLink: the big-integer path gives the same
-/// answer). Requires q ≠ 0 or p = ±1 handled: any coprime pair (p, q) with |p|, |q| < 2^63.
+/// The summary of N(p/q) computed in machine words without allocation, or nullopt when the word
+/// path cannot answer: p = INT64_MIN (|p| = 2^63 is not a word), or gcd(p, q) ≠ 1 (then
+/// TwoBridgeLink throws the DomainError). Any other (p, q) is answered, exactly as
+/// TwoBridgeLink(p, q) would: no intermediate exceeds |p| (extended Euclid, Knuth TAOCP 4.5.2).
 [[nodiscard]] std::optional<LinkSummaryWord> summarize_numerator_word(std::int64_t p,
                                                                       std::int64_t q) noexcept;
+
+/// out[i] = summarize_numerator_word(p[i], q[i]) for every i, computed with several independent
+/// Euclid chains interleaved (the divider is pipelined; one chain alone waits on it), so a batch
+/// is about twice as fast as a loop of single calls. No allocation.
+/// Throws DomainError when the three spans differ in length.
+void summarize_numerator_words(std::span<const std::int64_t> p, std::span<const std::int64_t> q,
+                               std::span<std::optional<LinkSummaryWord>> out);
+
+/// Word-size oriented class of N(p/q): Schubert's b(p,q) with q odd in (0, 2p).
+struct OrientedLinkSummaryWord {
+  std::int64_t p = 0;            ///< as OrientedTwoBridgeLink(p, q).p()
+  std::int64_t q = 0;            ///< as OrientedTwoBridgeLink(p, q).q()
+  std::int64_t canonical_q = 0;  ///< OrientedTwoBridgeLink::canonical(): min(q, q⁻¹ mod 2p)
+  int components = 0;
+};
+
+/// The oriented summary in machine words, or nullopt when 2|p| does not fit an int64
+/// (|p| ≥ 2^62) or gcd(p, q) ≠ 1. Agrees with OrientedTwoBridgeLink(p, q).canonical().
+[[nodiscard]] std::optional<OrientedLinkSummaryWord> summarize_oriented_numerator_word(
+    std::int64_t p, std::int64_t q) noexcept;
 
 }  // namespace fourplat
 
