@@ -12,7 +12,7 @@
 // methods are kept in namespace `reference` for tests and benchmarks.
 // Throws: DomainError for an empty sequence, for ∞ where a finite value is needed, and for
 //   sequences whose value is undefined (never happens for integer terms: the value is then in
-//   Q ∪ {∞}).
+//   Q ∪ {∞}); LimitError for a negative expansion too long to hold in memory.
 #pragma once
 
 #include <optional>
@@ -53,11 +53,12 @@ struct TwistSequence {
 /// The all-even expansion: standard order, every term even and non-zero except possibly a0 (which
 /// is 0 exactly when |x| < 1), where one exists (for p/q in lowest terms: exactly when p or q is
 /// even). Unique when it exists. Used by the Conway polynomial, genus and signature
-/// (Koseleff–Pecker, J. Symbolic Comput. 68, 2015).
+/// (Koseleff–Pecker, J. Symbolic Comput. 68, 2015). Throws DomainError for ∞.
 [[nodiscard]] std::optional<Terms> even_expansion(const Fraction& x);
 
 /// The negative (Hirzebruch–Jung) expansion x = b1 − 1/(b2 − 1/(... − 1/bk)) with b_i ≥ 2 for
-/// i ≥ 2 (b1 any integer). Throws DomainError for ∞.
+/// i ≥ 2 (b1 any integer). Throws DomainError for ∞, LimitError when the expansion would have
+/// more than 2^26 terms (its length is about the sum of the odd-indexed regular quotients).
 [[nodiscard]] Terms negative_expansion(const Fraction& x);
 
 /// Value of b1 − 1/(b2 − ... − 1/bk).
