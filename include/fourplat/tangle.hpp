@@ -8,8 +8,11 @@
 //   rotation       90°                    F → −1/F
 //   mirror image                          F → −F
 //   inversion      1/T := −T^r            F → 1/F
-// After an operation the twist sequence is kept when the operation extends it exactly (twists),
-// otherwise it is dropped and `twists()` returns the canonical sequence.
+// A given twist sequence is carried through every operation above, since each has an exact
+// counterpart on sequences: T + [n] adds n to the last twist; T * 1/[n] appends "n 0" (or adds n
+// to b in a trailing "b 0"); mirror negates every twist; inversion appends a 0 (or drops a
+// trailing 0: [... b 0 0] = [... b]); rotation is mirror of inversion. A tangle built from a
+// fraction carries none, and `twists()` then returns the canonical sequence.
 // Throws: ParseError never; DomainError where noted.
 #pragma once
 
