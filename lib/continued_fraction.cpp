@@ -2,6 +2,7 @@
 #include "fourplat/continued_fraction.hpp"
 
 #include <algorithm>
+#include <cassert>
 #include <cstdint>
 #include <string>
 #include <utility>
@@ -32,10 +33,11 @@ Mat multiply(const Mat& x, const Mat& y) {
           x.c * y.b + x.d * y.d};
 }
 
-// Product of the factors (t s; 1 0) for the terms t in order, with s = +1 (regular) or −1
-// (negative expansion). Runs of terms are packed greedily into int64 matrices with checked
-// arithmetic (no allocation per term); a term that does not fit a word becomes its own factor.
-std::vector<Mat> leaf_products(std::span<const Integer> terms, std::int64_t s) {
+// Product of the factors (t s; 1 0) for the terms t (read backwards when `reversed`, for
+// Conway's order), with s = +1 (regular) or −1 (negative expansion). Runs of terms are packed
+// greedily into int64 matrices with checked arithmetic (no allocation per term); a term that
+// does not fit a word becomes its own factor.
+std::vector<Mat> leaf_products(std::span<const Integer> terms, std::int64_t s, bool reversed) {
   std::vector<Mat> out;
   out.reserve(terms.size() / 4 + 1);
   std::int64_t a = 1, b = 0, c = 0, d = 1;  // the current packed word matrix
@@ -45,7 +47,9 @@ std::vector<Mat> leaf_products(std::span<const Integer> terms, std::int64_t s) {
     a = 1, b = 0, c = 0, d = 1;
     open = false;
   };
-  for (const Integer& t : terms) {
+  const std::size_t n = terms.size();
+  for (std::size_t i = 0; i < n; ++i) {
+    const Integer& t = terms[reversed ? n - 1 - i : i];
     const auto w = word_of(t);
     if (w) {
       // (a b; c d)·(t s; 1 0) = (a·t + b, s·a; c·t + d, s·c); s·a and s·c fail only at INT64_MIN.
@@ -70,28 +74,341 @@ std::vector<Mat> leaf_products(std::span<const Integer> terms, std::int64_t s) {
 
 // Balanced product tree: multiply neighbours pairwise until one matrix is left. Each level
 // halves the count, so the sizes stay balanced and GMP's subquadratic multiplication does the
-// work: O(M(N) log N) for an N-bit result.
-Fraction tree_value(std::span<const Integer> terms, std::int64_t s) {
+// work: O(M(N) log N) for an N-bit result, against O(N²) for the sequential recurrence.
+// Returns (p, q) normalised as a Fraction is (q ≥ 0; ∞ as 1/0); coprime since det = ±1.
+ValueParts tree_parts(std::span<const Integer> terms, std::int64_t s, bool reversed) {
   if (terms.empty()) throw DomainError("the value of an empty continued fraction is undefined");
-  std::vector<Mat> level = leaf_products(terms, s);
-  if (level.empty()) return Fraction(Integer(1), Integer(0));  // not reached: terms non-empty
+  std::vector<Mat> level = leaf_products(terms, s, reversed);
   while (level.size() > 2) {
     std::vector<Mat> next;
     next.reserve(level.size() / 2 + 1);
-    for (std::size_t i = 0; i + 1 < level.size(); i += 2) next.push_back(multiply(level[i], level[i + 1]));
+    for (std::size_t i = 0; i + 1 < level.size(); i += 2)
+      next.push_back(multiply(level[i], level[i + 1]));
     if (level.size() % 2 == 1) next.push_back(std::move(level.back()));
     level = std::move(next);
   }
-  if (level.size() == 1) return Fraction(std::move(level[0].a), std::move(level[0].c));
-  // Last step: only the first column of the product is needed.
-  const Mat& x = level[0];
-  const Mat& y = level[1];
-  return Fraction(x.a * y.a + x.b * y.c, x.c * y.a + x.d * y.c);
+  ValueParts r;
+  if (level.size() == 1) {
+    r.numerator = std::move(level[0].a);
+    r.denominator = std::move(level[0].c);
+  } else {  // last step: only the first column of the product is needed
+    const Mat& x = level[0];
+    const Mat& y = level[1];
+    r.numerator = x.a * y.a + x.b * y.c;
+    r.denominator = x.c * y.a + x.d * y.c;
+  }
+  if (r.denominator < 0) {
+    r.numerator = -r.numerator;
+    r.denominator = -r.denominator;
+  } else if (r.denominator == 0) {
+    r.numerator = 1;  // ±1/0: the one point ∞
+  }
+  return r;
+}
+
+Fraction tree_value(std::span<const Integer> terms, std::int64_t s, bool reversed) {
+  ValueParts r = tree_parts(terms, s, reversed);
+  // Fraction's constructor spends a gcd (coprimality is already known here).
+  return Fraction(std::move(r.numerator), std::move(r.denominator));
 }
 
 // ---------------------------------------------------------------------------------------------
 // Expansions.
 // ---------------------------------------------------------------------------------------------
+
+// ---------------------------------------------------------------------------------------------
+// Fast regular expansion: half-gcd divide and conquer with exact verification.
+//
+// Subtractive Euclid on a pair (A, B) of positive integers applies R: (A, B) → (A − B, B) when
+// A > B and L: (A, B) → (A, B − A) when B > A; the run lengths of R and L are the partial
+// quotients. In matrix form (A; B) = M (α; β) with M a product of R = (1 1; 0 1) and
+// L = (1 0; 1 1). Every matrix of SL2(Z) with non-negative entries is such a product in exactly
+// one way, and if M⁻¹(A; B) is positive then the product is a prefix of the Euclid sequence of
+// (A, B) (the first factor must be R when A > B, since L would make B > A; induct). So a
+// candidate reduction is exact as soon as its remainders are positive — that is the check that
+// makes every shortcut below safe, whatever heuristics chose it.
+//
+// The reduction of a pair is kept "safe" by the condition
+//     P(M, α, β):   α ≥ v  and  β ≥ w     for M = (u v; w x),
+// which is monotone along the Euclid sequence (remainders only drop, entries only grow), so
+// the admissible reductions form a prefix. Lemma (after Möller, "On Schönhage's algorithm and
+// subquadratic integer gcd computation", Math. Comp. 77, 2008): if (a; b) = M (α; β) with P,
+// and A = 2^k a + a', B = 2^k b + b' with 0 ≤ a', b' < 2^k, then M⁻¹(A; B) = 2^k (α; β) +
+// (x a' − v b'; u b' − w a') is positive, because x a' − v b' > −2^k v ≥ −2^k α. So a matrix
+// computed from the leading bits is a valid prefix for the whole numbers.
+//
+// hgcd(a, b) reduces (a, b) as far as P allows (about half their size): twice on the leading
+// half recursively (Knuth–Schönhage), and near the end by Lehmer steps on the leading 62 bits
+// in machine words (Lehmer 1938), each step again limited by P. After composing, P is checked
+// on the exact remainders and, should the composite overshoot, steps are undone from the end
+// ("correction steps"). Cost O(M(n) log n) against O(n²) for plain Euclid.
+// ---------------------------------------------------------------------------------------------
+
+namespace hgcd {
+
+// One run of the subtractive Euclid: q times R (α −= qβ) or q times L (β −= qα). Neighbouring
+// runs may share a side (a partial quotient split across levels); they are merged at the end.
+struct Step {
+  Integer q;
+  bool r_side;
+};
+
+// (A; B) = M (al; be) with M = (u v; w x), det M = 1, non-negative entries.
+struct State {
+  Integer al, be;
+  Integer u{1}, v{0}, w{0}, x{1};
+};
+
+std::size_t bits(const Integer& z) { return mpz_sizeinbase(detail::mpz(z), 2); }
+
+bool safe(const State& s) { return s.al >= s.v && s.be >= s.w; }
+
+// ⌊z / 2^k⌋ for z ≥ 0 when it fits in 64 bits, read straight from the limbs.
+std::uint64_t top_word(const Integer& z, std::size_t k) {
+  mpz_srcptr p = detail::mpz(z);
+  const auto n = static_cast<std::size_t>(mpz_size(p));
+  const std::size_t limb = k / 64, off = k % 64;
+  if (limb >= n) return 0;
+  std::uint64_t lo = mpz_getlimbn(p, static_cast<mp_size_t>(limb)) >> off;
+  if (off != 0 && limb + 1 < n)
+    lo |= mpz_getlimbn(p, static_cast<mp_size_t>(limb + 1)) << (64 - off);
+  return lo;
+}
+
+void apply_r(State& s, const Integer& j) {
+  mpz_submul(detail::mpz(s.al), detail::mpz(j), detail::mpz(s.be));
+  mpz_addmul(detail::mpz(s.v), detail::mpz(j), detail::mpz(s.u));
+  mpz_addmul(detail::mpz(s.x), detail::mpz(j), detail::mpz(s.w));
+}
+void apply_l(State& s, const Integer& j) {
+  mpz_submul(detail::mpz(s.be), detail::mpz(j), detail::mpz(s.al));
+  mpz_addmul(detail::mpz(s.u), detail::mpz(j), detail::mpz(s.v));
+  mpz_addmul(detail::mpz(s.w), detail::mpz(j), detail::mpz(s.x));
+}
+void undo(State& s, const Step& st) {
+  if (st.r_side) {
+    mpz_addmul(detail::mpz(s.al), detail::mpz(st.q), detail::mpz(s.be));
+    mpz_submul(detail::mpz(s.v), detail::mpz(st.q), detail::mpz(s.u));
+    mpz_submul(detail::mpz(s.x), detail::mpz(st.q), detail::mpz(s.w));
+  } else {
+    mpz_addmul(detail::mpz(s.be), detail::mpz(st.q), detail::mpz(s.al));
+    mpz_submul(detail::mpz(s.u), detail::mpz(st.q), detail::mpz(s.v));
+    mpz_submul(detail::mpz(s.w), detail::mpz(st.q), detail::mpz(s.x));
+  }
+}
+
+// The longest single run that keeps P: for an R-run, al − jβ ≥ v + ju gives
+// j = ⌊(al − v)/(be + u)⌋ (never above the true quotient ⌊al/be⌋). Returns false if j = 0.
+bool direct_step(State& s, std::vector<Step>& steps) {
+  Integer j;
+  if (s.al > s.be) {
+    j = (s.al - s.v) / (s.be + s.u);
+    if (j == 0) return false;
+    apply_r(s, j);
+    steps.push_back({std::move(j), true});
+  } else if (s.be > s.al) {
+    j = (s.be - s.w) / (s.al + s.x);
+    if (j == 0) return false;
+    apply_l(s, j);
+    steps.push_back({std::move(j), false});
+  } else {
+    return false;
+  }
+  return true;
+}
+
+// Undo steps (back to index `first` at most) until P holds again, then redo the longest safe
+// part of the last undone run. Precondition: P held when steps.size() was `first`.
+void correct(State& s, std::vector<Step>& steps, std::size_t first) {
+  if (safe(s)) return;
+  // P held at `first`, so the loop stops there at the latest.
+  while (!safe(s) && steps.size() > first) {
+    undo(s, steps.back());
+    steps.pop_back();
+  }
+  (void)direct_step(s, steps);  // P-limited, so it cannot overshoot again
+}
+
+// One Lehmer step: run the P-limited Euclid on the leading t ≤ 62 bits in words (P on the
+// words makes the word matrix valid for the whole pair, by the lemma), apply the word matrix
+// with single-limb multiplications, then correct against P for the whole state.
+// Returns false when the words admit no step.
+bool lehmer_step(State& s, std::vector<Step>& steps, std::size_t t, std::size_t first) {
+  const std::size_t n = std::max(bits(s.al), bits(s.be));
+  const std::size_t k = n > t ? n - t : 0;
+  std::uint64_t a = top_word(s.al, k), b = top_word(s.be, k);
+  std::uint64_t U = 1, V = 0, W = 0, X = 1;
+  const std::size_t mark = steps.size();
+  // Word invariants: a, b < 2^62 and every entry ≤ the original top words, so b + U, a + X
+  // and the updates below stay below 2^63.
+  while (true) {
+    if (a > b) {
+      if (a - V < b + U) break;
+      const std::uint64_t j = (a - V) / (b + U);
+      a -= j * b, V += j * U, X += j * W;
+      steps.push_back({Integer(j), true});
+    } else if (b > a) {
+      if (b - W < a + X) break;
+      const std::uint64_t j = (b - W) / (a + X);
+      b -= j * a, U += j * V, W += j * X;
+      steps.push_back({Integer(j), false});
+    } else {
+      break;
+    }
+  }
+  if (steps.size() == mark) return false;
+  // (al; be) ← (X·al − V·be; U·be − W·al);  M ← M·(U V; W X).
+  Integer na, nb;
+  mpz_mul_ui(detail::mpz(na), detail::mpz(s.al), X);
+  mpz_submul_ui(detail::mpz(na), detail::mpz(s.be), V);
+  mpz_mul_ui(detail::mpz(nb), detail::mpz(s.be), U);
+  mpz_submul_ui(detail::mpz(nb), detail::mpz(s.al), W);
+  s.al = std::move(na);
+  s.be = std::move(nb);
+  Integer nu, nv, nw, nx;
+  mpz_mul_ui(detail::mpz(nu), detail::mpz(s.u), U);
+  mpz_addmul_ui(detail::mpz(nu), detail::mpz(s.v), W);
+  mpz_mul_ui(detail::mpz(nv), detail::mpz(s.u), V);
+  mpz_addmul_ui(detail::mpz(nv), detail::mpz(s.v), X);
+  mpz_mul_ui(detail::mpz(nw), detail::mpz(s.w), U);
+  mpz_addmul_ui(detail::mpz(nw), detail::mpz(s.x), W);
+  mpz_mul_ui(detail::mpz(nx), detail::mpz(s.w), V);
+  mpz_addmul_ui(detail::mpz(nx), detail::mpz(s.x), X);
+  s.u = std::move(nu), s.v = std::move(nv), s.w = std::move(nw), s.x = std::move(nx);
+  correct(s, steps, first);
+  return true;
+}
+
+// Below this many leading bits a recursive call does not pay; Lehmer steps take over.
+constexpr std::size_t kRecurseBits = 1200;
+// Operand sizes differing by this many bits mean a big quotient: one direct division instead.
+constexpr std::size_t kDirectGap = 32;
+
+// Reduce s (which starts with M = I) as far as P allows; appends the runs to `steps`.
+void reduce(State& s, std::vector<Step>& steps) {
+  const std::size_t first = steps.size();
+  const std::size_t n0 = std::max(bits(s.al), bits(s.be));
+  while (true) {
+    const std::size_t big = std::max(bits(s.al), bits(s.be));
+    const std::size_t small = std::min(bits(s.al), bits(s.be));
+    if (big - small >= kDirectGap) {
+      if (!direct_step(s, steps)) return;
+      continue;
+    }
+    const std::size_t e = std::max({bits(s.u), bits(s.v), bits(s.w), bits(s.x)});
+    // P allows roughly (small − e)/2 more bits of reduction (remainders shrink as entries grow).
+    const std::size_t room = small > e + 2 ? (small - e - 2) / 2 : 0;
+    if (room < 2) {
+      if (!direct_step(s, steps)) return;
+      continue;
+    }
+    // Leading part for the recursive call: at most half of the original size (so the call
+    // really is smaller), at most 2·room minus a margin (so it does not overshoot P).
+    const std::size_t sub = std::min((n0 + 1) / 2, 2 * room > 64 ? 2 * room - 32 : 0);
+    if (sub < kRecurseBits) {
+      const Integer before = s.al;
+      const Integer before_b = s.be;
+      // No net progress (no word step, or the correction undid them all): one direct step.
+      if (!lehmer_step(s, steps, std::min<std::size_t>(62, 2 * room), first) ||
+          (s.al == before && s.be == before_b)) {
+        if (!direct_step(s, steps)) return;
+      }
+      continue;
+    }
+    const std::size_t k = big - sub;
+    State t;
+    mpz_fdiv_q_2exp(detail::mpz(t.al), detail::mpz(s.al), k);
+    mpz_fdiv_q_2exp(detail::mpz(t.be), detail::mpz(s.be), k);
+    const std::size_t mark = steps.size();
+    reduce(t, steps);
+    if (steps.size() == mark) {
+      if (!direct_step(s, steps)) return;
+      continue;
+    }
+    // New remainders from the low parts: (al; be) = 2^k (t.al; t.be) + T⁻¹(al_lo; be_lo),
+    // T⁻¹ = (x −v; −w u). Positive by the lemma.
+    Integer lo_a, lo_b;
+    mpz_fdiv_r_2exp(detail::mpz(lo_a), detail::mpz(s.al), k);
+    mpz_fdiv_r_2exp(detail::mpz(lo_b), detail::mpz(s.be), k);
+    mpz_mul_2exp(detail::mpz(s.al), detail::mpz(t.al), k);
+    mpz_addmul(detail::mpz(s.al), detail::mpz(t.x), detail::mpz(lo_a));
+    mpz_submul(detail::mpz(s.al), detail::mpz(t.v), detail::mpz(lo_b));
+    mpz_mul_2exp(detail::mpz(s.be), detail::mpz(t.be), k);
+    mpz_addmul(detail::mpz(s.be), detail::mpz(t.u), detail::mpz(lo_b));
+    mpz_submul(detail::mpz(s.be), detail::mpz(t.w), detail::mpz(lo_a));
+    assert(s.al > 0 && s.be > 0);
+    // M ← M·T.
+    Integer nu = s.u * t.u + s.v * t.w, nv = s.u * t.v + s.v * t.x;
+    Integer nw = s.w * t.u + s.x * t.w, nx = s.w * t.v + s.x * t.x;
+    s.u = std::move(nu), s.v = std::move(nv), s.w = std::move(nw), s.x = std::move(nx);
+    const std::size_t before = steps.size();
+    correct(s, steps, first);
+    // If the correction went back below where the call started, no net progress: stop here
+    // with a direct step (or return) rather than repeat the same call.
+    if (steps.size() < before && steps.size() <= mark) {
+      if (!direct_step(s, steps)) return;
+    }
+  }
+}
+
+// Partial quotients of A/B for A > B > 0 coprime (the terms a1, ..., an of the regular
+// expansion), appended to `out`.
+void expand(Integer A, Integer B, Terms& out) {
+  std::vector<Step> steps;
+  auto full_step = [&](Integer& big, const Integer& small, bool r_side) {
+    Integer q;
+    mpz_fdiv_qr(detail::mpz(q), detail::mpz(big), detail::mpz(big), detail::mpz(small));
+    steps.push_back({std::move(q), r_side});
+  };
+  while (B != 0 && A != 0) {
+    const std::size_t na = bits(A), nb = bits(B);
+    if (na <= 64 && nb <= 64) {
+      // Word Euclid to the end. A tie (1, 1) can only be the very last step: it extends the
+      // previous run, so that the last quotient is ≥ 2 as the regular expansion requires.
+      std::uint64_t a = top_word(A, 0), b = top_word(B, 0);
+      bool side = steps.empty() || steps.back().r_side;
+      while (a != 0 && b != 0) {
+        if (a != b) side = a > b;
+        if (side) {
+          steps.push_back({Integer(a / b), true});
+          a %= b;
+        } else {
+          steps.push_back({Integer(b / a), false});
+          b %= a;
+        }
+      }
+      break;
+    }
+    if (std::max(na, nb) - std::min(na, nb) >= kDirectGap) {
+      if (A > B) full_step(A, B, true); else full_step(B, A, false);
+      continue;
+    }
+    State s;
+    s.al = std::move(A);
+    s.be = std::move(B);
+    const std::size_t mark = steps.size();
+    reduce(s, steps);
+    A = std::move(s.al);
+    B = std::move(s.be);
+    if (steps.size() == mark) {
+      if (A > B) full_step(A, B, true); else full_step(B, A, false);
+    }
+  }
+  // Merge runs of one side; the first run is R since A > B.
+  bool have = false, side = true;
+  for (Step& st : steps) {
+    if (st.q == 0) continue;
+    if (have && st.r_side == side) {
+      out.back() += st.q;
+    } else {
+      out.push_back(std::move(st.q));
+      side = st.r_side;
+      have = true;
+    }
+  }
+}
+
+}  // namespace hgcd
 
 // Longest expansion built in memory (2^26 Integers ≈ 1 GiB): beyond it, LimitError.
 constexpr std::uint64_t kMaxTerms = std::uint64_t{1} << 26;
@@ -123,10 +440,10 @@ Terms regular_expansion_impl(const Fraction& x) {
   if (x.is_infinite()) throw_infinite("regular continued fraction");
   const auto wp = word_of(x.numerator());
   const auto wq = word_of(x.denominator());
-  if (wp && wq) {
+  Terms out;
+  if (wp && wq) {  // word path: Euclid on machine words, no Integer arithmetic
     std::int64_t a0 = 0;
-    (void)detail::try_floor_div(*wp, *wq, a0);
-    Terms out;
+    (void)detail::try_floor_div(*wp, *wq, a0);  // q > 0, so it cannot fail
     out.emplace_back(a0);
     const auto r = static_cast<std::uint64_t>(detail::floor_mod(*wp, *wq));
     if (r != 0)
@@ -134,7 +451,13 @@ Terms regular_expansion_impl(const Fraction& x) {
                                         [&](std::uint64_t a) { out.emplace_back(a); });
     return out;
   }
-  return euclid(x.numerator(), x.denominator());
+  // a0 = ⌊p/q⌋ and r in [0, q); then the half-gcd expansion of q/r.
+  Integer a0, r;
+  mpz_fdiv_qr(detail::mpz(a0), detail::mpz(r), detail::mpz(x.numerator()),
+              detail::mpz(x.denominator()));
+  out.push_back(std::move(a0));
+  if (r != 0) hgcd::expand(x.denominator(), std::move(r), out);
+  return out;
 }
 
 // Standard-order terms of |x| for x finite; shared by the canonical form and the crossings.
@@ -147,12 +470,15 @@ Terms abs_expansion(const Fraction& x) {
 
 Terms regular_expansion(const Fraction& x) { return regular_expansion_impl(x); }
 
-Fraction standard_value(std::span<const Integer> terms) { return tree_value(terms, 1); }
+Fraction standard_value(std::span<const Integer> terms) { return tree_value(terms, 1, false); }
+
+ValueParts standard_value_parts(std::span<const Integer> terms) {
+  return tree_parts(terms, 1, false);
+}
 
 Fraction twist_value(std::span<const Integer> twists) {
   if (twists.empty()) throw DomainError("the value of an empty twist sequence is undefined");
-  std::vector<Integer> reversed(twists.rbegin(), twists.rend());
-  return tree_value(reversed, 1);
+  return tree_value(twists, 1, true);
 }
 
 TwistSequence canonical_twists(const Fraction& x) {
@@ -233,7 +559,7 @@ Terms negative_expansion(const Fraction& x) {
   return out;
 }
 
-Fraction negative_value(std::span<const Integer> terms) { return tree_value(terms, -1); }
+Fraction negative_value(std::span<const Integer> terms) { return tree_value(terms, -1, false); }
 
 Integer twist_crossings(const Fraction& x) {
   if (x.is_infinite()) return 0;
