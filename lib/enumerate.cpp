@@ -240,12 +240,13 @@ class LinkWalker {
     it.amphichiral = alpha + delta == beta;  // q⁻¹ ≡ −q (mod p)
     // The walk visits the least word of its orbit, which is the least q (Stern–Brocot order);
     // taking the minimum again costs three comparisons and keeps the item right by itself.
-    const i64 cq = std::min(delta, alpha);
-    const i64 cmq = std::min(cq, std::min(beta - delta, beta - alpha));
-    it.canonical_q = cq;
-    it.canonical_mirror_q = cmq;
+    delta_ = delta;
+    alpha_ = alpha;
+    cq_ = std::min(delta, alpha);
+    cq_mirror_ = std::min(beta - delta, beta - alpha);
+    it.canonical_mirror_q = std::min(cq_, cq_mirror_);
     if (!opt_.oriented) {
-      emit(opt_.mirrors ? cq : cmq);
+      emit(opt_.mirrors ? cq_ : it.canonical_mirror_q);
       return;
     }
     const i64 two_p = 2 * beta;  // < 2^63: p < 2^62
@@ -279,13 +280,22 @@ class LinkWalker {
     }
   }
 
+  // Emits b(p,q); q < 2p. The drawing tangle and its unoriented class follow from q mod p.
   void emit(i64 q) {
     EnumeratedLink& it = item_;
     it.q = q;
-    it.fraction_q = q < it.p ? q : q - 2 * it.p;
+    const i64 r = q < it.p ? q : q - it.p;
+    it.canonical_q = (r == delta_ || r == alpha_) ? cq_ : cq_mirror_;
+    if (q < it.p) {
+      it.fraction_p = it.p;
+      it.fraction_q = q;
+    } else {
+      it.fraction_p = -it.p;
+      it.fraction_q = 2 * it.p - q;
+    }
     if (opt_.twists) {
-      it.twists = std::span<const i64>(twists_.data(),
-                                       canonical_twists_word(it.p, it.fraction_q, twists_));
+      it.twists = std::span<const i64>(
+          twists_.data(), canonical_twists_word(it.fraction_p, it.fraction_q, twists_));
     }
     if (!sink_(it)) stopped_ = true;
   }
@@ -303,7 +313,8 @@ class LinkWalker {
     it.canonical_q = unoriented_q;
     it.canonical_mirror_q = unoriented_q;
     it.q = opt_.oriented ? oriented_q : unoriented_q;
-    it.fraction_q = unoriented_q;  // N(1/0) is the unknot, N(0/1) the unlink
+    it.fraction_p = p;  // N(1/0) is the unknot, N(0/1) the unlink
+    it.fraction_q = unoriented_q;
     if (opt_.twists) {
       it.twists = std::span<const i64>(twists_.data(), canonical_twists_word(p, unoriented_q, twists_));
     }
@@ -320,6 +331,7 @@ class LinkWalker {
   bool middle_ = false;
   Sizes sizes_;
   EnumeratedLink item_;
+  i64 delta_ = 0, alpha_ = 0, cq_ = 0, cq_mirror_ = 0;  // the current orbit's two classes
   std::array<i64, 96> twists_{};
 };
 

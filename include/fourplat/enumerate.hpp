@@ -97,12 +97,15 @@ struct EnumeratedLink {
   /// The least q of the item's class in the requested classification: unoriented 0 ≤ q < p
   /// (mirrors identified or not); oriented: q odd, 0 < q < 2p. The item is b(p,q).
   std::int64_t q = 0;
-  std::int64_t canonical_q = 0;         ///< least q, unoriented, mirrors distinguished
-  std::int64_t canonical_mirror_q = 0;  ///< least q, unoriented, up to mirror image
-  /// A tangle p/fraction_q whose numerator closure is the item: fraction_q = q when q < p, else
-  /// q − 2p (odd, so the oriented form is q again); the unknot is 1/0, the unlink 0/1.
+  /// A tangle fraction_p/fraction_q (reduced, fraction_q ≥ 0) whose numerator closure is the
+  /// item: p/q when q < p, else −p/(2p − q) (whose oriented closure is b(p,q) again, as
+  /// OrientedTwoBridgeLink reads it); the unknot is 1/0, the unlink 0/1.
+  std::int64_t fraction_p = 0;
   std::int64_t fraction_q = 0;
-  /// Kauffman–Lambropoulou canonical twist sequence of p/fraction_q in Conway's order (only with
+  /// The unoriented class of N(fraction): its least q with mirrors distinguished, and up to mirror.
+  std::int64_t canonical_q = 0;
+  std::int64_t canonical_mirror_q = 0;
+  /// Kauffman–Lambropoulou canonical twist sequence of the fraction in Conway's order (only with
   /// options.twists; otherwise empty).
   std::span<const std::int64_t> twists{};
 };
