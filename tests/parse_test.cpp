@@ -229,8 +229,12 @@ TEST(ParseFractionWord, FastPathAgreesWithTheFullParser) {
   EXPECT_FALSE(fp::parse_fraction_word("1/-9223372036854775808"));
   const auto max = fp::parse_fraction_word("-9223372036854775807/ 3");
   ASSERT_TRUE(max);
-  EXPECT_EQ(max->p, -9223372036854775807LL / 3);
-  EXPECT_EQ(max->q, 1);
+  EXPECT_EQ(max->p, -9223372036854775807LL);  // 2^63 − 1 = 7² · 73 · 127 · 337 · 92737 · 649657
+  EXPECT_EQ(max->q, 3);
+  const auto reduced = fp::parse_fraction_word("9223372036854775807/-49");
+  ASSERT_TRUE(reduced);
+  EXPECT_EQ(reduced->p, -188232082384791343LL);
+  EXPECT_EQ(reduced->q, 1);
   const auto r = fp::parse_fraction_word(" 6/-4 ");
   ASSERT_TRUE(r);
   EXPECT_EQ(r->p, -3);
