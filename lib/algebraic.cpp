@@ -67,9 +67,9 @@ Integer integer_total(const std::vector<RationalTangle>& parts) {
   return total;
 }
 
-/// Ernst–Sumners with fourplat's sign (see the opening comment): N(a/b + c/d) = b(ad + bc,
-/// a'd + b'c) with a'b − ab' = 1.
-TwoBridgeLink numerator_of_two(const Fraction& x, const Fraction& y) {
+}  // namespace
+
+TwoBridgeLink numerator_closure_of_sum(const Fraction& x, const Fraction& y) {
   const Integer& a = x.numerator();
   const Integer& b = x.denominator();
   const Integer& c = y.numerator();
@@ -81,6 +81,8 @@ TwoBridgeLink numerator_of_two(const Fraction& x, const Fraction& y) {
   const Integer b_prime = -t;
   return TwoBridgeLink(a * d + b * c, a_prime * d + b_prime * c);
 }
+
+namespace {
 
 /// Union–find over the 4r ends, for counting the cycles of the closed diagram.
 class Ends {
@@ -131,7 +133,7 @@ std::optional<TwoBridgeLink> TangleSum::closure_two_bridge(Closure which) const 
     if (t.is_integer()) continue;
     (first == nullptr ? first : second) = &t.fraction();
   }
-  return numerator_of_two(*first + Fraction(integer_total(parts_)), *second);
+  return numerator_closure_of_sum(*first + Fraction(integer_total(parts_)), *second);
 }
 
 Integer TangleSum::determinant(Closure which) const {

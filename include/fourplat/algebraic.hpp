@@ -4,8 +4,8 @@
 // integer tangle (then the integers fold into it). A TangleSum keeps the summands, so that
 //   * the numerator closure of a sum of two rational tangles is still the 2-bridge link it is
 //     (Ernst–Sumners, Math. Proc. Camb. Phil. Soc. 108, 1990): N(a/b + c/d) = b(ad + bc, ·);
-//   * the determinant of either closure of any sum is |Σ p_i Π_{j≠i} q_j| for N
-//     (and the corresponding expression for D), whatever r is;
+//   * the determinant of either closure of any sum, whatever r is: |Σ p_i Π_{j≠i} q_j| for N, and
+//     Π |q_i| for D (D(T + S) is the connected sum D(T) # D(S));
 //   * sums of three or more non-integer parts (Montesinos links) are kept as they are.
 // Throws: DomainError for an empty sum and where noted.
 #pragma once
@@ -43,5 +43,11 @@ class TangleSum {
 };
 
 [[nodiscard]] TangleSum sum(const RationalTangle& a, const RationalTangle& b);
+
+/// Ernst–Sumners (Math. Proc. Camb. Phil. Soc. 108, 1990) in fourplat's conventions:
+/// N(a/b + c/d) = b(ad + bc, a'd + b'c) with a'b − ab' = 1 (derivation in lib/algebraic.cpp).
+/// Valid for every pair of fractions, integers and ∞ included (then it agrees with the closure
+/// of the rational sum).
+[[nodiscard]] TwoBridgeLink numerator_closure_of_sum(const Fraction& x, const Fraction& y);
 
 }  // namespace fourplat
