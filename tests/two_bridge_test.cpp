@@ -7,6 +7,7 @@
 #include <gmp.h>
 
 #include <cstdint>
+#include <ostream>
 #include <limits>
 #include <numeric>
 #include <optional>
@@ -19,6 +20,11 @@
 #include "testing.hpp"
 
 namespace fourplat {
+
+// Readable failure messages ("b(7,3)" rather than bytes); found by argument-dependent lookup.
+void PrintTo(const TwoBridgeLink& l, std::ostream* os) { *os << to_string(l); }
+void PrintTo(const OrientedTwoBridgeLink& l, std::ostream* os) { *os << to_string(l); }
+
 namespace {
 
 using testing::iterations;
