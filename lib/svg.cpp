@@ -153,8 +153,8 @@ Path ortho(Pt a, Pt da, Pt b, Pt db, const std::vector<double>& lanes, double rm
 // ---------------------------------------------------------------------------------------------
 // Layout.
 constexpr double kCurl = 0.35;    // control-point offset of a crossing's strands, along the box
-constexpr double kBend = 0.8;     // the corner turning a strand from one box into the next
-constexpr double kLane = 0.4;     // a route passes this far outside the box it runs along
+constexpr double kBend = 0.7;     // the corner turning a strand from one box into the next
+constexpr double kLane = 0.35;    // a route passes this far outside the box it runs along
 constexpr double kTurn = 0.35;    // half-width of the U-turn of a seed end into the second box
 constexpr double kMargin = 0.8;   // closure arcs and loose ends run this far outside the drawing
 
@@ -797,7 +797,7 @@ std::string svg(const Diagram& d, const SvgOptions& o) {
       klass.push_back(o.modulus <= 24 ? c.convert_to<std::int64_t>() : rank[c]);
   }
 
-  const Style S;
+  Style S;
   const Layout L = layout(d, o.crossing_numbers);
   const Trace T = trace(L);
   const Annotation A = annotate(d, L, T);
@@ -815,8 +815,13 @@ std::string svg(const Diagram& d, const SvgOptions& o) {
   const double w_u = x1 - x0 + 2 * S.margin, h_u = y1 - y0 + 2 * S.margin;
   const double s = std::min({o.unit, o.max_width / w_u, o.max_height / h_u});
   const Writer W(x0 - S.margin, y0 - S.margin, s);
-  const std::string wpx = num(std::ceil(w_u * s)), hpx = num(std::ceil(h_u * s));
+  const std::string wpx = num(std::ceil(w_u * s - 1e-6)), hpx = num(std::ceil(h_u * s - 1e-6));
   const double font = std::max(0.30, 9.0 / s);  // never below 9 px
+  // Small drawings keep strokes of at least 1.5 px (2 px coloured) and gaps to match.
+  S.stroke = std::max(S.stroke, 1.5 / s);
+  S.color_stroke = std::max(S.color_stroke, 2.0 / s);
+  S.halo = std::max(S.halo, 1.2 / s);
+  S.gap = std::max(S.gap, 1.9 * S.stroke);
 
   std::vector<std::int64_t> arc_class(T.arcs.size(), -1);
   if (colored)
