@@ -821,7 +821,7 @@ std::string svg(const Diagram& d, const SvgOptions& o) {
   S.stroke = std::max(S.stroke, 1.5 / s);
   S.color_stroke = std::max(S.color_stroke, 2.0 / s);
   S.halo = std::max(S.halo, 1.2 / s);
-  S.gap = std::max(S.gap, 1.9 * S.stroke);
+  S.gap = std::max(S.gap, 1.9 * (colored ? S.color_stroke : S.stroke));
 
   std::vector<std::int64_t> arc_class(T.arcs.size(), -1);
   if (colored)
