@@ -502,29 +502,82 @@ TwistSequence canonical_twists(const Fraction& x) {
   return out;
 }
 
+namespace {
+
+// The all-even expansion read off the regular expansion of |x|, with runs compressed.
+// Each step of the direct method takes the even a with |y − a| < 1 (unique unless y is an odd
+// integer, where no expansion exists) and continues with 1/(y − a). On y = [h; b1, b2, ...]:
+//   h even:            emit h, continue with [b1; b2, ...];
+//   h odd, h ≥ 3:      emit h + 1, continue with −w/(w − 1) for w = [b1; ...], i.e. with
+//                      −[1; b1 − 1, b2, ...] (b1 > 1) or −[b2 + 1; b3, ...] (b1 = 1);
+//   h = 1, b1 = m:     the same rule m times in a row emits 2, −2, 2, ... (m terms) and
+//                      continues with ±[b2 + 1; b3, ...].
+// Signs alternate as the case says (the rule is odd: the expansion of −y is minus that of y).
+// The length can be exponential in the size of x (N/(N − 1) gives N − 1 terms), so a first
+// pass counts it and a second builds it. The walk on the terms is O(number of terms).
+template <class Emit>
+bool walk_even(Terms stack, Emit&& emit) {  // stack: the regular terms of |x|, last first
+  bool negative = false;
+  while (true) {
+    Integer h = std::move(stack.back());
+    stack.pop_back();
+    if (stack.empty()) {  // y = h, an integer
+      if (h % 2 != 0) return false;
+      emit(h, negative, 1);
+      return true;
+    }
+    if (h % 2 == 0) {
+      emit(h, negative, 1);
+      continue;
+    }
+    if (h != 1) {
+      emit(h + 1, negative, 1);
+      negative = !negative;
+      if (stack.back() > 1) {
+        stack.back() -= 1;
+        stack.emplace_back(1);  // the next head is 1
+      } else {
+        stack.pop_back();       // b1 = 1, never the last regular term
+        stack.back() += 1;
+      }
+      continue;
+    }
+    // h = 1: a run of m alternating twos.
+    Integer m = std::move(stack.back());
+    stack.pop_back();
+    emit(Integer(2), negative, m);
+    if (m % 2 != 0) negative = !negative;
+    if (stack.empty()) return true;
+    stack.back() += 1;
+  }
+}
+
+}  // namespace
+
 std::optional<Terms> even_expansion(const Fraction& x) {
   if (x.is_infinite()) throw_infinite("all-even continued fraction");
-  // Each step takes the even a with |y − a| < 1 (unique unless y is an odd integer, where no
-  // expansion exists), then continues with 1/(y − a), whose modulus exceeds 1. Subtracting an
-  // even number keeps the parities of numerator and denominator and inversion swaps them, so
-  // the process ends at 0 exactly when p or q is even. Denominators drop strictly: it ends.
-  Integer p = x.numerator(), q = x.denominator();
-  if (p % 2 != 0 && q % 2 != 0) return std::nullopt;
+  // Subtracting an even number keeps the parities of p and q and inversion swaps them, and the
+  // direct method ends at 0/1: so an expansion exists exactly when p or q is even.
+  if (x.numerator() % 2 != 0 && x.denominator() % 2 != 0) return std::nullopt;
+  Terms regular = abs_expansion(x);
+  std::reverse(regular.begin(), regular.end());
+  Integer length = 0;
+  const bool ok = walk_even(regular, [&](const Integer&, bool, const Integer& m) { length += m; });
+  if (!ok) return std::nullopt;  // not reached: the parity test decided
+  if (length > kMaxTerms)
+    throw LimitError("the all-even continued fraction of this fraction has " + length.str() +
+                     " terms (more than " + std::to_string(kMaxTerms) + ")");
+  const bool flip = x.sign() < 0;
   Terms out;
-  while (true) {
-    // a = the even integer nearest to p/q: 2·round(p/(2q)) with |p/q − a| < 1.
-    Integer a = 2 * div_floor(p + q, 2 * q);
-    Integer r = p - a * q;  // |r| < q
-    out.push_back(std::move(a));
-    if (r == 0) break;
-    // y' = q / r
-    p = std::move(q);
-    q = std::move(r);
-    if (q < 0) {
-      p = -p;
-      q = -q;
+  out.reserve(static_cast<std::size_t>(length));
+  (void)walk_even(std::move(regular), [&](const Integer& a, bool negative, const Integer& m) {
+    bool neg = negative != flip;
+    const auto count = static_cast<std::size_t>(m);
+    for (std::size_t k = 0; k < count; ++k) {
+      out.push_back(neg ? Integer(-a) : a);
+      neg = !neg;
     }
-  }
+  });
   return out;
 }
 

@@ -12,7 +12,7 @@
 // methods are kept in namespace `reference` for tests and benchmarks.
 // Throws: DomainError for an empty sequence, for ∞ where a finite value is needed, and for
 //   sequences whose value is undefined (never happens for integer terms: the value is then in
-//   Q ∪ {∞}); LimitError for a negative expansion too long to hold in memory.
+//   Q ∪ {∞}); LimitError for a negative or all-even expansion too long to hold in memory.
 #pragma once
 
 #include <optional>
@@ -63,7 +63,8 @@ struct ValueParts {
 /// The all-even expansion: standard order, every term even and non-zero except possibly a0 (which
 /// is 0 exactly when |x| < 1), where one exists (for p/q in lowest terms: exactly when p or q is
 /// even). Unique when it exists. Used by the Conway polynomial, genus and signature
-/// (Koseleff–Pecker, J. Symbolic Comput. 68, 2015). Throws DomainError for ∞.
+/// (Koseleff–Pecker, J. Symbolic Comput. 68, 2015). Throws DomainError for ∞, LimitError when it
+/// would have more than 2^26 terms (N/(N − 1) has N − 1).
 [[nodiscard]] std::optional<Terms> even_expansion(const Fraction& x);
 
 /// The negative (Hirzebruch–Jung) expansion x = b1 − 1/(b2 − 1/(... − 1/bk)) with b_i ≥ 2 for
