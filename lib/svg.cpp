@@ -902,7 +902,7 @@ std::string svg(const Diagram& d, const SvgOptions& o) {
   if (o.arrows) {
     auto arrow = [&](Pt p, Pt u, const char* fill) {
       const Pt n{-u.y, u.x};
-      const double a = std::max(0.2, 4.5 / s), b = 0.62 * a;
+      const double a = std::max(colored ? 0.27 : 0.23, 5.0 / s), b = 0.68 * a;  // half-length, half-width
       const Pt tip = p + a * u, l = p - a * u + b * n, r = p - a * u - b * n, back = p - 0.4 * a * u;
       return "<path d=\"M" + W.pt(tip) + "L" + W.pt(l) + "L" + W.pt(back) + "L" + W.pt(r) + "Z\" fill=\"" + fill +
              "\"/>\n";
@@ -915,7 +915,7 @@ std::string svg(const Diagram& d, const SvgOptions& o) {
         const int dir = A.link_dir[st.link] * (st.forward ? 1 : -1);
         if (dir == 0 || pieces[a][i].empty()) continue;
         const bool under_badge = colored && o.color_numbers && i == badge_piece[a];
-        const auto [p, u] = point_at(pieces[a][i], under_badge ? (dir > 0 ? 0.85 : 0.15) : 0.5);
+        const auto [p, u] = point_at(pieces[a][i], under_badge ? (dir > 0 ? 0.75 : 0.25) : 0.5);
         arrows += arrow(p, dir > 0 ? u : -1.0 * u, fill);
       }
     }
