@@ -273,12 +273,27 @@ TEST(Svg, OneGapPerCrossingAndTwoArcEndsAtEach) {
     const int len = std::uniform_int_distribution<int>(1, 6)(g);
     for (int i = 0; i < len; ++i) t.push_back(std::uniform_int_distribution<long>(-4, 4)(g));
     const auto c = static_cast<DiagramClosure>(std::uniform_int_distribution<int>(0, 2)(g));
-    const Diagram d = twists(t, c);
+    // Every third case a sum of two or three such sequences.
+    std::vector<TwistSequence> parts(r % 3 == 0 ? 2 + r % 2 : 1);
     std::ostringstream what;
-    for (long v : t) what << v << ' ';
+    for (std::size_t p = 0; p < parts.size(); ++p) {
+      if (p > 0) {
+        t.assign(static_cast<std::size_t>(std::uniform_int_distribution<int>(1, 4)(g)), 0);
+        for (long& v : t) v = std::uniform_int_distribution<long>(-3, 3)(g);
+        what << "+ ";
+      }
+      for (long v : t) {
+        parts[p].twists.emplace_back(v);
+        what << v << ' ';
+      }
+    }
     what << "closure " << to_string(c);
+    const Diagram d = Diagram::of_sum(parts, c);
+    SvgOptions o;
+    o.crossing_numbers = r % 2 == 1;  // labels move the closure arcs outwards
+    o.arrows = r % 4 == 1;
     std::string s;
-    ASSERT_NO_THROW(s = svg(d)) << what.str();
+    ASSERT_NO_THROW(s = svg(d, o)) << what.str();
     const auto doc = parse_ok(s);
     EXPECT_EQ(static_cast<std::int64_t>(by_class(doc, "gap").size()), d.crossing_count()) << what.str();
     EXPECT_EQ(by_class(doc, "arc").size(), d.arcs().size()) << what.str();
