@@ -10,7 +10,8 @@
 //   mirror image: b(p,q)* = b(p,−q);  amphichiral iff q² ≡ −1 (mod p).
 // Canonical representatives take the least q in the class, so they are usable as hash keys.
 // Crossing number: the sum of the partial quotients of p/q (Kauffman, Murasugi, Thistlethwaite
-// 1987). Throws: DomainError for gcd(p,q) ≠ 1 and for a fraction with no closure meaning.
+// 1987). Throws: DomainError for gcd(p,q) ≠ 1 and for batch spans of different lengths; the
+// word-path functions never throw (they return nullopt where the GMP path would throw).
 #pragma once
 
 #include <cstddef>
