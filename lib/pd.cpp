@@ -340,9 +340,7 @@ PdDiagram::PdDiagram(PdCode code) : code_(std::move(code)) {
     }
   }
 
-  // 5. Orientation and signs of the crossings; the coloring matrix.
-  std::vector<detail::SparseRow> rows;
-  rows.reserve(static_cast<std::size_t>(c));
+  // 5. Orientation and signs of the crossings.
   for (std::int64_t x = 0; x < c; ++x) {
     const auto& r = code_[static_cast<std::size_t>(x)];
     PdCrossing pc;
@@ -355,10 +353,19 @@ PdDiagram::PdDiagram(PdCode code) : code_(std::move(code)) {
     pc.under_in_arc = arc_of[L(r[0])];
     pc.under_out_arc = arc_of[L(r[2])];
     writhe_ += pc.sign;
-    rows.push_back({{pc.over_arc, Integer(2)}, {pc.under_in_arc, Integer(-1)}, {pc.under_out_arc, Integer(-1)}});
     crossings_.push_back(pc);
   }
-  smith_ = std::make_unique<detail::SmithForm>(static_cast<std::int64_t>(arcs_.size()), std::move(rows));
+}
+
+const detail::SmithForm& PdDiagram::smith() const {
+  if (!smith_) {  // the coloring matrix: 2·over − under_in − under_out per crossing
+    std::vector<detail::SparseRow> rows;
+    rows.reserve(crossings_.size());
+    for (const auto& pc : crossings_)
+      rows.push_back({{pc.over_arc, Integer(2)}, {pc.under_in_arc, Integer(-1)}, {pc.under_out_arc, Integer(-1)}});
+    smith_ = std::make_unique<detail::SmithForm>(static_cast<std::int64_t>(arcs_.size()), std::move(rows));
+  }
+  return *smith_;
 }
 
 PdDiagram::~PdDiagram() = default;
@@ -387,18 +394,18 @@ std::optional<std::int64_t> PdDiagram::linking_number() const {
 }
 
 Integer PdDiagram::determinant() const {
-  if (smith_->rank() != smith_->cols() - 1) return Integer(0);
+  if (smith().rank() != smith().cols() - 1) return Integer(0);
   Integer d = 1;
-  for (const auto& f : smith_->nontrivial_factors()) d *= f;
+  for (const auto& f : smith().nontrivial_factors()) d *= f;
   return d;
 }
 
-std::vector<Integer> PdDiagram::invariant_factors() const { return smith_->nontrivial_factors(); }
+std::vector<Integer> PdDiagram::invariant_factors() const { return smith().nontrivial_factors(); }
 
-Integer PdDiagram::coloring_count(const Integer& n) const { return smith_->count_solutions_mod(n); }
+Integer PdDiagram::coloring_count(const Integer& n) const { return smith().count_solutions_mod(n); }
 
 std::optional<std::vector<Integer>> PdDiagram::coloring_witness(const Integer& n) const {
-  for (auto& x : smith_->solution_generators_mod(n)) {
+  for (auto& x : smith().solution_generators_mod(n)) {
     const Integer shift = x[0];
     bool constant = true;
     for (auto& v : x) {

@@ -203,7 +203,7 @@ struct EndColors {
 class Diagram {
  public:
   /// The largest total number of crossings a Diagram accepts (LimitError above it).
-  static constexpr std::int64_t max_crossings = std::int64_t{1} << 26;
+  static constexpr std::int64_t max_crossings = std::int64_t{1} << 24;
 
   /// The standard diagram of a Conway twist sequence (any sequence: zeros and mixed signs allowed).
   /// Throws DomainError if empty, LimitError if it has more than max_crossings crossings.

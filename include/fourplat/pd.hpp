@@ -14,7 +14,8 @@
 // component are consecutive and increase along it, with the under-strand entering at i and leaving
 // at k; the diagram is planar — tracing faces gives V − E + F = 2 for every connected piece
 // (Euler's formula). Where a component's labels do not fix its direction (one or two edges and no
-// under-passage) it is read as entering its first over-passage at j.
+// under-passage) it is read as entering its first over-passage at j; such a component lies over
+// everything it meets, so that choice moves individual signs but no writhe or linking number.
 // Invariants (Fox 1962, "A quick trip through knot theory"; common practice): the coloring matrix
 // has one row per crossing, 2·over − under_in − under_out, one column per arc; its Smith normal
 // form over Z gives the number of n-colorings n^{a−r}·Π gcd(n, d_i) and the determinant
@@ -52,6 +53,8 @@ struct PdCrossing {
   std::int64_t over_arc = 0, under_in_arc = 0, under_out_arc = 0;
 };
 
+/// A validated PD code. The Smith form behind determinant() and the colorings is computed on the
+/// first call that needs it (so one PdDiagram must not be shared by threads before that call).
 class PdDiagram {
  public:
   /// Validates the code (see the opening comment); throws DomainError naming what is wrong.
@@ -104,7 +107,8 @@ class PdDiagram {
   std::vector<std::vector<std::int64_t>> arcs_;
   std::int64_t writhe_ = 0;
   int pieces_ = 0;
-  std::unique_ptr<detail::SmithForm> smith_;
+  [[nodiscard]] const detail::SmithForm& smith() const;
+  mutable std::unique_ptr<detail::SmithForm> smith_;  // computed on first use
 };
 
 }  // namespace fourplat
