@@ -263,6 +263,9 @@ std::array<PortG, 4> layout_summand(const Diagram& d, const Summand& sm, Layout&
     const std::int64_t c0 = box.first_crossing, cl = c0 + k - 1;
     const bool positive = box.twists > 0;
     if (box.kind == BoxKind::horizontal) {  // T + [a]: a row to the right, twisting NE and SE
+      // The row's bottom-left corner: straight on from SE when SE already points right (the
+      // previous box was a row), else one rounded bend down-and-right from a column's foot. The
+      // NE end then runs right, down beside the column (kLane from the row) and into the row.
       Pt bl = SE.dir.x > 0.5 ? SE.p : SE.p + Pt{kBend, kBend};
       if (NE.dir.y < -0.5) bl.x = std::max(bl.x, NE.p.x + 3 * kTurn + 0.15);
       const Pt tl = bl - Pt{0, 1};
@@ -281,6 +284,8 @@ std::array<PortG, 4> layout_summand(const Diagram& d, const Summand& sm, Layout&
       NE = {tl + Pt{static_cast<double>(k), 0}, kRight, corner_node(cl, ci(Corner::ne))};
       SE = {bl + Pt{static_cast<double>(k), 0}, kRight, corner_node(cl, ci(Corner::se))};
     } else {  // T * 1/[a]: a column below, twisting SW and SE
+      // Mirror image of the row case across the diagonal: SE bends down into the column's top
+      // right corner, SW runs down, right under the row (kLane above the column) and down again.
       Pt tr = SE.dir.y > 0.5 ? SE.p : SE.p + Pt{kBend, kBend};
       if (SW.dir.x < -0.5) tr.y = std::max(tr.y, SW.p.y + 3 * kTurn + 0.15);
       const Pt tl = tr - Pt{1, 0};
@@ -323,6 +328,9 @@ Box2 bbox(const Layout& L, std::size_t link_from, std::size_t x_from, std::size_
 }
 
 /// Merges every junction away: the two links meeting there become one, or a closed loop.
+/// Junctions are the ends of the seeds [0] and [∞]; a seed strand may be empty (length 0) or, when
+/// the first box has no twists, a short straight piece — either way it disappears into the links
+/// of the boxes, sums and closures that meet it.
 void merge_junctions(Layout& L) {
   for (std::int64_t j = 0; j < L.junctions; ++j) {
     const Node J{NodeKind::junction, j, 0};
@@ -569,6 +577,11 @@ struct Annotation {
 }
 
 /// Checks every link against the Diagram's connectivity and maps drawn arcs to Diagram arcs.
+/// The drawing is built independently of Diagram::build (from the boxes only), so agreement here
+/// is a cross-check of both; a disagreement is a bug and throws std::logic_error. A drawn arc's
+/// pieces carry PD edge labels at their crossing corners (Crossing::edge), and all labels of one
+/// drawn arc must belong to one Diagram arc; crossingless pieces are matched through the ends
+/// they pass (Diagram::end_arc).
 Annotation annotate(const Diagram& d, const Layout& L, const Trace& T) {
   const auto& xs = d.crossings();
   auto port_of = [](const Node& n) {

@@ -32,7 +32,8 @@
 
 namespace fourplat {
 
-/// The largest diagram svg() draws (the output grows by about 0.5 kB per crossing).
+/// The largest diagram svg() draws (the output grows by about 0.6 kB per crossing, more with
+/// arrows and labels).
 inline constexpr std::int64_t max_svg_crossings = 100000;
 
 struct SvgOptions {
