@@ -5,7 +5,11 @@
 // parse_fraction_word and summarize_numerator_word (no allocation), everything else through
 // parse_tangle_sum and the exact big-integer classes. --no-fast-path (hidden, for tests) forces
 // the second, so the two can be compared on the same input.
+#include <gmp.h>
+#include <unistd.h>
+
 #include <cstdint>
+#include <cstring>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -27,24 +31,77 @@ struct Options {
   bool no_fast_path = false;
 };
 
-// Numbers print the same from both paths: JSON numbers when they fit int64, else strings.
-void json_number(fmt::memory_buffer& b, std::int64_t x) { fmt::format_to(std::back_inserter(b), "{}", x); }
-void json_number(fmt::memory_buffer& b, const Integer& x) {
-  if (const auto w = to_int64(x)) {
-    json_number(b, *w);
-  } else {
-    b.push_back('"');
-    const std::string s = x.str();
-    b.append(s.data(), s.data() + s.size());
-    b.push_back('"');
+/// A record written straight into the output buffer: room for `bound` bytes is made first, so
+/// each piece is a plain copy (no capacity checks, no format-string parsing). Bounds: a JSON
+/// string needs at most 6 bytes per input byte (\u00XX), a number its decimal digits.
+class Sink {
+ public:
+  Sink(fmt::memory_buffer& b, std::size_t bound) : b_(b), start_(b.size()) {
+    b_.resize(start_ + bound);
+    p_ = b_.data() + start_;
   }
+  ~Sink() { b_.resize(static_cast<std::size_t>(p_ - b_.data())); }
+  Sink(const Sink&) = delete;
+  Sink& operator=(const Sink&) = delete;
+
+  void lit(std::string_view s) noexcept {
+    std::memcpy(p_, s.data(), s.size());
+    p_ += s.size();
+  }
+  void ch(char c) noexcept { *p_++ = c; }
+  void num(std::int64_t x) noexcept {
+    const fmt::format_int f(x);
+    lit(std::string_view(f.data(), f.size()));
+  }
+  void num(const Integer& x) {
+    if (const auto w = to_int64(x)) {
+      num(*w);
+    } else {
+      lit(x.str());
+    }
+  }
+  // Numbers in JSON: numbers when they fit int64, else decimal strings (docs/tool.md).
+  void json_num(std::int64_t x) noexcept { num(x); }
+  void json_num(const Integer& x) {
+    if (const auto w = to_int64(x)) {
+      num(*w);
+    } else {
+      ch('"');
+      lit(x.str());
+      ch('"');
+    }
+  }
+  void json_string(std::string_view s) noexcept { p_ = write_json_string(p_, s); }
+  /// "n" or "p/q".
+  template <typename N>
+  void fraction(const N& p, const N& q) {
+    num(p);
+    if (q != 1) {
+      ch('/');
+      num(q);
+    }
+  }
+  /// "b(p,q)".
+  template <typename N>
+  void link(const N& p, const N& q) {
+    lit("b(");
+    num(p);
+    ch(',');
+    num(q);
+    ch(')');
+  }
+
+ private:
+  fmt::memory_buffer& b_;
+  std::size_t start_;
+  char* p_ = nullptr;
+};
+
+/// Upper bound on the decimal digits (and sign) of x.
+std::size_t digits_bound(std::int64_t) noexcept { return 20; }
+std::size_t digits_bound(const Integer& x) noexcept {
+  return mpz_sizeinbase(x.backend().data(), 10) + 2;
 }
-void text_number(fmt::memory_buffer& b, std::int64_t x) { fmt::format_to(std::back_inserter(b), "{}", x); }
-void text_number(fmt::memory_buffer& b, const Integer& x) {
-  const std::string s = x.str();
-  b.append(s.data(), s.data() + s.size());
-}
-void put(fmt::memory_buffer& b, std::string_view s) { b.append(s.data(), s.data() + s.size()); }
 
 /// Everything classify prints for a 2-bridge closure; N is std::int64_t or Integer.
 template <typename N>
@@ -62,94 +119,95 @@ struct SumRecord {
   int parts;
 };
 
-/// Fraction text: "n", "p/q", "1/0".
+/// The tangle's fraction as classify prints it ("n", "p/q", "1/0"), or null (a non-rational sum).
 template <typename N>
-void fraction_text(fmt::memory_buffer& b, const N& p, const N& q) {
-  text_number(b, p);
-  if (q != 1) {
-    b.push_back('/');
-    text_number(b, q);
-  }
-}
-
-template <typename N>
-void link_text(fmt::memory_buffer& b, const N& p, const N& q) {
-  put(b, "b(");
-  text_number(b, p);
-  b.push_back(',');
-  text_number(b, q);
-  b.push_back(')');
-}
+struct FractionText {
+  bool present;
+  N p, q;
+};
 
 class Writer {
  public:
-  Writer(const Options& o) : o_(o), out_(Output::get()) {}
+  explicit Writer(const Options& o) : o_(o), out_(Output::get()) {}
 
-  /// One record. `fraction` is written by the callback (nothing for a non-rational sum).
-  template <typename N, typename FractionFn>
-  void link(std::string_view input, FractionFn&& fraction, const std::vector<std::string>* summands,
+  template <typename N>
+  void link(std::string_view input, const FractionText<N>& f, const std::vector<std::string>* summands,
             const LinkRecord<N>& r) {
-    fmt::memory_buffer& b = out_.buffer();
-    const std::string_view kind = kind_name(r.kind);
-    if (o_.json) {
-      begin_json(b, input, fraction);
-      put(b, ",\"p\":");
-      json_number(b, r.p);
-      put(b, ",\"q\":");
-      json_number(b, r.q);
-      fmt::format_to(std::back_inserter(b), ",\"components\":{}", r.components);
-      put(b, ",\"determinant\":");
-      json_number(b, r.p);
-      put(b, ",\"crossing_number\":");
-      json_number(b, r.crossings);
-      put(b, r.amphichiral ? ",\"amphichiral\":true,\"canonical\":\"" : ",\"amphichiral\":false,\"canonical\":\"");
-      link_text(b, r.p, r.canonical_q);
-      put(b, "\",\"canonical_mirror\":\"");
-      link_text(b, r.p, r.mirror_q);
-      put(b, "\",\"kind\":\"");
-      put(b, kind);
-      put(b, "\",\"two_bridge\":true");
-      end_json(b, summands);
-    } else {
-      b.push_back(o_.closure == Closure::numerator ? 'N' : 'D');
-      b.push_back('(');
-      put(b, input);
-      put(b, ") = ");
-      link_text(b, r.p, r.q);
-      put(b, r.components == 1 ? "  knot  det " : "  2-component link  det ");
-      text_number(b, r.p);
-      put(b, "  crossings ");
-      text_number(b, r.crossings);
-      put(b, r.amphichiral ? "  amphichiral  " : "  chiral  ");
-      put(b, kind);
-      put(b, "  canonical ");
-      link_text(b, r.p, r.canonical_q);
-      put(b, "  up to mirror ");
-      link_text(b, r.p, r.mirror_q);
-      b.push_back('\n');
+    const std::size_t bound = 6 * input.size() + 12 * digits_bound(r.p) + 2 * digits_bound(f.p) +
+                              2 * digits_bound(f.q) + strings_bound(summands) + 512;
+    {
+      Sink k(out_.buffer(), bound);
+      const std::string_view kind = kind_name(r.kind);
+      if (o_.json) {
+        begin_json(k, input, f);
+        k.lit(",\"p\":");
+        k.json_num(r.p);
+        k.lit(",\"q\":");
+        k.json_num(r.q);
+        k.lit(r.components == 1 ? ",\"components\":1" : ",\"components\":2");
+        k.lit(",\"determinant\":");
+        k.json_num(r.p);
+        k.lit(",\"crossing_number\":");
+        k.json_num(r.crossings);
+        k.lit(r.amphichiral ? ",\"amphichiral\":true,\"canonical\":\"" : ",\"amphichiral\":false,\"canonical\":\"");
+        k.link(r.p, r.canonical_q);
+        k.lit("\",\"canonical_mirror\":\"");
+        k.link(r.p, r.mirror_q);
+        k.lit("\",\"kind\":\"");
+        k.lit(kind);
+        k.lit("\",\"two_bridge\":true");
+        end_json(k, summands);
+      } else {
+        k.ch(o_.closure == Closure::numerator ? 'N' : 'D');
+        k.ch('(');
+        k.lit(input);
+        k.lit(") = ");
+        k.link(r.p, r.q);
+        k.lit(r.components == 1 ? "  knot  det " : "  2-component link  det ");
+        k.num(r.p);
+        k.lit("  crossings ");
+        k.num(r.crossings);
+        k.lit(r.amphichiral ? "  amphichiral  " : "  chiral  ");
+        k.lit(kind);
+        k.lit("  canonical ");
+        k.link(r.p, r.canonical_q);
+        k.lit("  up to mirror ");
+        k.link(r.p, r.mirror_q);
+        k.ch('\n');
+      }
     }
     out_.maybe_flush();
   }
 
   void not_two_bridge(std::string_view input, const std::vector<std::string>& summands, const SumRecord& r) {
-    fmt::memory_buffer& b = out_.buffer();
-    if (o_.json) {
-      begin_json(b, input, [](fmt::memory_buffer& bb) { put(bb, "null"); });
-      put(b, ",\"p\":null,\"q\":null");
-      fmt::format_to(std::back_inserter(b), ",\"components\":{}", r.components);
-      put(b, ",\"determinant\":");
-      json_number(b, r.determinant);
-      put(b, ",\"crossing_number\":null,\"amphichiral\":null,\"canonical\":null,\"canonical_mirror\":null,"
-             "\"kind\":null,\"two_bridge\":false");
-      end_json(b, &summands);
-    } else {
-      b.push_back(o_.closure == Closure::numerator ? 'N' : 'D');
-      b.push_back('(');
-      put(b, input);
-      fmt::format_to(std::back_inserter(b), ")  not 2-bridge ({} rational parts)  {}  det ", r.parts,
-                     r.components == 1 ? "knot" : fmt::format("{}-component link", r.components));
-      text_number(b, r.determinant);
-      b.push_back('\n');
+    {
+      Sink k(out_.buffer(), 6 * input.size() + strings_bound(&summands) + 4 * digits_bound(r.determinant) + 512);
+      if (o_.json) {
+        begin_json(k, input, FractionText<Integer>{false, 0, 1});
+        k.lit(",\"p\":null,\"q\":null,\"components\":");
+        k.num(std::int64_t{r.components});
+        k.lit(",\"determinant\":");
+        k.json_num(r.determinant);
+        k.lit(",\"crossing_number\":null,\"amphichiral\":null,\"canonical\":null,\"canonical_mirror\":null,"
+              "\"kind\":null,\"two_bridge\":false");
+        end_json(k, &summands);
+      } else {
+        k.ch(o_.closure == Closure::numerator ? 'N' : 'D');
+        k.ch('(');
+        k.lit(input);
+        k.lit(")  not 2-bridge (");
+        k.num(std::int64_t{r.parts});
+        k.lit(" rational parts)  ");
+        if (r.components == 1) {
+          k.lit("knot");
+        } else {
+          k.num(std::int64_t{r.components});
+          k.lit("-component link");
+        }
+        k.lit("  det ");
+        k.num(r.determinant);
+        k.ch('\n');
+      }
     }
     out_.maybe_flush();
   }
@@ -157,13 +215,18 @@ class Writer {
   /// A bad input: a JSON error record, or one line on stderr.
   void error(std::string_view input, std::uint64_t line, std::string_view message) {
     if (o_.json) {
-      fmt::memory_buffer& b = out_.buffer();
-      put(b, "{\"input\":");
-      append_json_string(b, input);
-      if (line != 0) fmt::format_to(std::back_inserter(b), ",\"line\":{}", line);
-      put(b, ",\"error\":");
-      append_json_string(b, message);
-      put(b, "}\n");
+      {
+        Sink k(out_.buffer(), 6 * (input.size() + message.size()) + 64);
+        k.lit("{\"input\":");
+        k.json_string(input);
+        if (line != 0) {
+          k.lit(",\"line\":");
+          k.num(static_cast<std::int64_t>(line));
+        }
+        k.lit(",\"error\":");
+        k.json_string(message);
+        k.lit("}\n");
+      }
       out_.maybe_flush();
     } else if (line != 0) {
       print_error(fmt::format("line {}: bad tangle {}: {}", line, quoted(input), message));
@@ -183,25 +246,38 @@ class Writer {
     return "unknown";
   }
 
-  template <typename FractionFn>
-  void begin_json(fmt::memory_buffer& b, std::string_view input, FractionFn&& fraction) {
-    put(b, "{\"input\":");
-    append_json_string(b, input);
-    put(b, ",\"fraction\":");
-    fraction(b);
-    put(b, o_.closure == Closure::numerator ? ",\"closure\":\"numerator\"" : ",\"closure\":\"denominator\"");
+  static std::size_t strings_bound(const std::vector<std::string>* v) {
+    std::size_t n = 0;
+    if (v != nullptr) {
+      for (const std::string& s : *v) n += 6 * s.size() + 3;
+    }
+    return n;
   }
 
-  static void end_json(fmt::memory_buffer& b, const std::vector<std::string>* summands) {
-    if (summands != nullptr) {
-      put(b, ",\"summands\":[");
-      for (std::size_t k = 0; k < summands->size(); ++k) {
-        if (k != 0) b.push_back(',');
-        append_json_string(b, (*summands)[k]);
-      }
-      b.push_back(']');
+  template <typename N>
+  void begin_json(Sink& k, std::string_view input, const FractionText<N>& f) {
+    k.lit("{\"input\":");
+    k.json_string(input);
+    if (f.present) {
+      k.lit(",\"fraction\":\"");
+      k.fraction(f.p, f.q);
+      k.ch('"');
+    } else {
+      k.lit(",\"fraction\":null");
     }
-    put(b, "}\n");
+    k.lit(o_.closure == Closure::numerator ? ",\"closure\":\"numerator\"" : ",\"closure\":\"denominator\"");
+  }
+
+  static void end_json(Sink& k, const std::vector<std::string>* summands) {
+    if (summands != nullptr) {
+      k.lit(",\"summands\":[");
+      for (std::size_t i = 0; i < summands->size(); ++i) {
+        if (i != 0) k.ch(',');
+        k.json_string((*summands)[i]);
+      }
+      k.ch(']');
+    }
+    k.lit("}\n");
   }
 
   const Options& o_;
@@ -229,12 +305,7 @@ bool classify_word(std::string_view input, const Options& o, Writer& w) {
   if (!s) return false;
   const LinkRecord<std::int64_t> r{s->p, s->q, s->canonical_q, s->canonical_mirror_q, s->crossing_number,
                                    s->components, s->amphichiral, s->kind};
-  const std::int64_t fp = f->p, fq = f->q;
-  w.link(input, [&](fmt::memory_buffer& b) {
-    b.push_back('"');
-    fraction_text(b, fp, fq);
-    b.push_back('"');
-  }, nullptr, r);
+  w.link(input, FractionText<std::int64_t>{true, f->p, f->q}, nullptr, r);
   return true;
 }
 
@@ -248,13 +319,8 @@ void classify_exact(std::string_view input, const Options& o, Writer& w) {
   }
   const std::optional<RationalTangle> rational =
       is_sum ? sum.as_rational() : std::optional<RationalTangle>(sum.summands().front());
-  const auto fraction = [&](fmt::memory_buffer& b) {
-    if (rational) {
-      append_json_string(b, to_string(rational->fraction()));
-    } else {
-      put(b, "null");
-    }
-  };
+  FractionText<Integer> fraction{false, 0, 1};
+  if (rational) fraction = {true, rational->fraction().numerator(), rational->fraction().denominator()};
   std::optional<TwoBridgeLink> link;
   if (rational) {
     link = closure(*rational, o.closure);
@@ -297,7 +363,7 @@ void run(const Options& o) {
       one(t, 0);
     }
   } else {
-    LineReader reader(stdin);
+    LineReader reader(STDIN_FILENO);
     Progress progress("classified lines:");
     std::string_view line;
     while (reader.next(line)) {

@@ -3,6 +3,7 @@
 
 #include <unistd.h>
 
+#include <cerrno>
 #include <cstring>
 #include <stdexcept>
 
@@ -60,21 +61,23 @@ Json integer_json(const Integer& x) {
   return x.str();
 }
 
-void append_json_string(fmt::memory_buffer& out, std::string_view s) {
+char* write_json_string(char* out, std::string_view s) noexcept {
   static constexpr char hex[] = "0123456789abcdef";
-  out.push_back('"');
-  for (std::size_t i = 0; i < s.size();) {
+  *out++ = '"';
+  const std::size_t n = s.size();
+  for (std::size_t i = 0; i < n;) {
     const auto b = static_cast<unsigned char>(s[i]);
-    if (b == '"' || b == '\\') {
-      out.push_back('\\');
-      out.push_back(static_cast<char>(b));
+    if (b >= 0x20 && b < 0x80 && b != '"' && b != '\\') {  // the common case: copied as is
+      *out++ = static_cast<char>(b);
+      ++i;
+    } else if (b == '"' || b == '\\') {
+      *out++ = '\\';
+      *out++ = static_cast<char>(b);
       ++i;
     } else if (b < 0x20) {
       const char esc[] = {'\\', 'u', '0', '0', hex[b >> 4U], hex[b & 0xFU]};
-      out.append(esc, esc + 6);
-      ++i;
-    } else if (b < 0x80) {
-      out.push_back(static_cast<char>(b));
+      std::memcpy(out, esc, 6);
+      out += 6;
       ++i;
     } else {
       // A valid UTF-8 sequence is copied; anything else becomes U+FFFD, one byte at a time.
@@ -82,7 +85,7 @@ void append_json_string(fmt::memory_buffer& out, std::string_view s) {
       if (b >= 0xC2 && b <= 0xDF) len = 2;
       else if (b >= 0xE0 && b <= 0xEF) len = 3;
       else if (b >= 0xF0 && b <= 0xF4) len = 4;
-      bool ok = len != 0 && i + len <= s.size();
+      bool ok = len != 0 && i + len <= n;
       for (std::size_t k = 1; ok && k < len; ++k) {
         ok = (static_cast<unsigned char>(s[i + k]) & 0xC0U) == 0x80U;
       }
@@ -95,16 +98,25 @@ void append_json_string(fmt::memory_buffer& out, std::string_view s) {
         ok = !(b == 0xF0 && b1 < 0x90) && !(b == 0xF4 && b1 >= 0x90);
       }
       if (ok) {
-        out.append(s.data() + i, s.data() + i + len);
+        std::memcpy(out, s.data() + i, len);
+        out += len;
         i += len;
       } else {
-        const std::string_view replacement = "\xEF\xBF\xBD";
-        out.append(replacement.data(), replacement.data() + replacement.size());
+        std::memcpy(out, "\xEF\xBF\xBD", 3);
+        out += 3;
         ++i;
       }
     }
   }
-  out.push_back('"');
+  *out++ = '"';
+  return out;
+}
+
+void append_json_string(fmt::memory_buffer& out, std::string_view s) {
+  const std::size_t start = out.size();
+  out.resize(start + 6 * s.size() + 2);
+  char* end = write_json_string(out.data() + start, s);
+  out.resize(static_cast<std::size_t>(end - out.data()));
 }
 
 std::vector<std::string> group_words(const std::vector<std::string>& words) {
@@ -204,14 +216,20 @@ void add_closure_option(CLI::App& app, Closure& closure) {
 
 bool LineReader::refill() {
   if (eof_) return false;
+  Output::get().flush();  // the reader may wait: let the answers so far out first
   pos_ = 0;
-  end_ = std::fread(buf_.data(), 1, buf_.size(), f_);
-  if (end_ == 0) {
-    eof_ = true;
-    if (std::ferror(f_)) throw std::runtime_error("cannot read the input: " + std::string(std::strerror(errno)));
-    return false;
+  for (;;) {
+    const ssize_t n = ::read(fd_, buf_.data(), buf_.size());
+    if (n > 0) {
+      end_ = static_cast<std::size_t>(n);
+      return true;
+    }
+    if (n == 0) break;
+    if (errno != EINTR) throw std::runtime_error("cannot read the input: " + std::string(std::strerror(errno)));
   }
-  return true;
+  end_ = 0;
+  eof_ = true;
+  return false;
 }
 
 bool LineReader::next(std::string_view& line) {

@@ -59,13 +59,17 @@ bool stderr_is_terminal();
 void print_error(std::string_view message);
 
 /// The input quoted for a message: at most ~60 characters, control characters shown as '?'.
+/// (The std::string overload beats std::quoted, which argument-dependent lookup also finds.)
 std::string quoted(std::string_view input);
+inline std::string quoted(const std::string& input) { return quoted(std::string_view(input)); }
 
 /// An Integer as JSON: a number when it fits int64, else its decimal string (docs/tool.md).
 Json integer_json(const Integer& x);
 
 /// Appends s as a JSON string literal (escapes; invalid UTF-8 bytes become U+FFFD).
 void append_json_string(fmt::memory_buffer& out, std::string_view s);
+/// The same into raw memory with room for 6 * s.size() + 2 bytes; returns the end.
+char* write_json_string(char* out, std::string_view s) noexcept;
 
 /// Groups command-line words into tangle texts, so that unquoted sums and twist sequences work:
 /// words inside an open '[' or joined by '+' form one tangle ("[2", "1]", "3/5", "+", "2/7" gives
@@ -88,11 +92,15 @@ OrientedTwoBridgeLink oriented_closure(const RationalTangle& t, Closure which);
 /// Adds --closure numerator|denominator to a command.
 void add_closure_option(CLI::App& app, Closure& closure);
 
-/// Reads lines from a FILE* through a large buffer; a line is valid until the next call.
-/// Memory stays flat: only a line longer than the buffer is copied (and only that line).
+/// Reads lines from a file descriptor through a large buffer; a line is valid until the next
+/// call. Memory stays flat: only a line longer than the buffer is copied (and only that line).
+/// Before each read that may wait for input, the buffered output is flushed, so a pipeline that
+/// feeds lines slowly gets its answers as they come.
 class LineReader {
  public:
-  explicit LineReader(std::FILE* f) : f_(f), buf_(std::size_t{1} << 16) {}
+  explicit LineReader(int fd) : fd_(fd), buf_(std::size_t{1} << 16) {}
+  /// Reads the FILE's descriptor directly (do not mix with stdio reads of the same FILE).
+  explicit LineReader(std::FILE* f) : LineReader(fileno(f)) {}
   /// The next line without its '\n' (and '\r'); false at the end of the input.
   bool next(std::string_view& line);
   /// 1-based number of the line last returned.
@@ -100,7 +108,7 @@ class LineReader {
 
  private:
   bool refill();
-  std::FILE* f_;
+  int fd_;
   std::vector<char> buf_;
   std::size_t pos_ = 0;
   std::size_t end_ = 0;
