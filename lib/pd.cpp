@@ -98,7 +98,7 @@ PdCode parse_pd(std::string_view text) {
   Cursor c(text);
   PdCode pd;
   c.skip();
-  if (c.done()) throw ParseError(0, "empty PD code: expected X[i,j,k,l] items, [[i,j,k,l],...] or 4 labels a line");
+  if (c.done()) throw ParseError(c.pos(), "empty PD code: expected X[i,j,k,l] items, [[i,j,k,l],...] or 4 labels a line");
   if (c.peek() == '[') {  // [[a,b,c,d], ...]
     c.advance();
     c.skip();
