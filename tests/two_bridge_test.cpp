@@ -6,7 +6,9 @@
 #include <gtest/gtest.h>
 #include <gmp.h>
 
+#include <algorithm>
 #include <cstdint>
+#include <cstdio>
 #include <ostream>
 #include <limits>
 #include <numeric>
@@ -386,9 +388,9 @@ TEST(WordPath, AgreesAtTheWordBoundaries) {
             ((Integer(1) << 64) + 1) / 3 + 3);
 }
 
-TEST(WordPath, BatchAgreesWithSingleCalls) {
+TEST(WordPath, BatchAgreesWithSingleCallsForEveryKernel) {
   std::mt19937_64& g = rng();
-  const std::size_t n = static_cast<std::size_t>(iterations(5000));
+  const std::size_t n = static_cast<std::size_t>(iterations(5000)) + 13;  // not a multiple of 32
   std::vector<std::int64_t> ps(n), qs(n);
   for (std::size_t i = 0; i < n; ++i) {
     ps[i] = random_word(std::uniform_int_distribution<unsigned>(1, 63)(g));
@@ -400,22 +402,42 @@ TEST(WordPath, BatchAgreesWithSingleCalls) {
         qs[i] = (Integer(qs[i]) / d).convert_to<std::int64_t>();
       }
     }
+    if (i % 7 == 0) {  // a huge first partial quotient (≥ 2^50: the vector kernel's scalar fix-up)
+      ps[i] = (std::int64_t{1} << 62) + 1 + static_cast<std::int64_t>(g() % 1000) * 2;
+      qs[i] = static_cast<std::int64_t>(g() % 5000) + 1;
+    }
   }
+  ps[0] = std::numeric_limits<std::int64_t>::max();  // the largest word, a tiny quotient next
+  qs[0] = std::numeric_limits<std::int64_t>::max() - 1;
   std::vector<std::optional<LinkSummaryWord>> out(n);
-  summarize_numerator_words(ps, qs, out);
-  for (std::size_t i = 0; i < n; ++i) {
-    const auto one = summarize_numerator_word(ps[i], qs[i]);
-    ASSERT_EQ(out[i].has_value(), one.has_value()) << ps[i] << " " << qs[i];
-    if (!one) continue;
-    EXPECT_EQ(out[i]->p, one->p);
-    EXPECT_EQ(out[i]->q, one->q);
-    EXPECT_EQ(out[i]->canonical_q, one->canonical_q) << ps[i] << " " << qs[i];
-    EXPECT_EQ(out[i]->canonical_mirror_q, one->canonical_mirror_q);
-    EXPECT_EQ(out[i]->crossing_number, one->crossing_number) << ps[i] << " " << qs[i];
-    EXPECT_EQ(out[i]->components, one->components);
-    EXPECT_EQ(out[i]->amphichiral, one->amphichiral);
-    EXPECT_EQ(out[i]->kind, one->kind);
+  int kernels = 0;
+  for (WordKernel kernel : {WordKernel::best, WordKernel::scalar, WordKernel::avx512}) {
+    if (!word_kernel_available(kernel)) {
+      EXPECT_THROW(summarize_numerator_words(ps, qs, out, kernel), DomainError);
+      continue;
+    }
+    ++kernels;
+    std::fill(out.begin(), out.end(), std::nullopt);
+    summarize_numerator_words(ps, qs, out, kernel);
+    for (std::size_t i = 0; i < n; ++i) {
+      const auto one = summarize_numerator_word(ps[i], qs[i]);
+      SCOPED_TRACE("kernel " + std::to_string(static_cast<int>(kernel)) + ", input " +
+                   std::to_string(ps[i]) + "/" + std::to_string(qs[i]));
+      ASSERT_EQ(out[i].has_value(), one.has_value());
+      if (!one) continue;
+      EXPECT_EQ(out[i]->p, one->p);
+      EXPECT_EQ(out[i]->q, one->q);
+      EXPECT_EQ(out[i]->canonical_q, one->canonical_q);
+      EXPECT_EQ(out[i]->canonical_mirror_q, one->canonical_mirror_q);
+      EXPECT_EQ(out[i]->crossing_number, one->crossing_number);
+      EXPECT_EQ(out[i]->components, one->components);
+      EXPECT_EQ(out[i]->amphichiral, one->amphichiral);
+      EXPECT_EQ(out[i]->kind, one->kind);
+    }
   }
+  EXPECT_GE(kernels, 2);
+  std::printf("batch kernels tested: %d (AVX-512 %s)\n", kernels,
+              word_kernel_available(WordKernel::avx512) ? "available" : "not available");
   // Short and empty batches, and mismatched lengths.
   std::vector<std::optional<LinkSummaryWord>> three(3);
   const std::vector<std::int64_t> p3 = {7, 0, 4}, q3 = {3, 1, 2};

@@ -140,12 +140,22 @@ struct LinkSummaryWord {
 [[nodiscard]] std::optional<LinkSummaryWord> summarize_numerator_word(std::int64_t p,
                                                                       std::int64_t q) noexcept;
 
-/// out[i] = summarize_numerator_word(p[i], q[i]) for every i, computed with several independent
-/// Euclid chains interleaved (the divider is pipelined; one chain alone waits on it), so a batch
-/// is about twice as fast as a loop of single calls. No allocation.
-/// Throws DomainError when the three spans differ in length.
+/// The kernel of summarize_numerator_words: the fastest one this CPU runs (`best`), the portable
+/// scalar one (eight interleaved Euclid chains), or AVX-512 (32 chains in four 8-lane vectors,
+/// quotients from double-precision division corrected in integers; x86-64 with AVX-512F/DQ).
+enum class WordKernel { best, scalar, avx512 };
+
+/// Whether this build and CPU can run the kernel (`best` and `scalar` always can).
+[[nodiscard]] bool word_kernel_available(WordKernel k) noexcept;
+
+/// out[i] = summarize_numerator_word(p[i], q[i]) for every i, with many independent Euclid
+/// chains in flight at once (one chain alone waits on the divider's latency), so a batch is
+/// several times faster than a loop of single calls. No allocation; every kernel gives the same
+/// answers. Throws DomainError when the three spans differ in length or the kernel is not
+/// available.
 void summarize_numerator_words(std::span<const std::int64_t> p, std::span<const std::int64_t> q,
-                               std::span<std::optional<LinkSummaryWord>> out);
+                               std::span<std::optional<LinkSummaryWord>> out,
+                               WordKernel kernel = WordKernel::best);
 
 /// Word-size oriented class of N(p/q): Schubert's b(p,q) with q odd in (0, 2p).
 struct OrientedLinkSummaryWord {
