@@ -172,7 +172,7 @@ TEST(Coloring, AllTanglesUpToTwelveCrossings) {
       }
     }
   }
-  EXPECT_GT(checked, 2000);
+  EXPECT_GT(checked, 1000);  // 1..8 exhaustively gives more than 1000 closures alone
 }
 
 TEST(Coloring, ThreeWaysOnSmallDiagrams) {
