@@ -146,26 +146,78 @@ Fraction tree_value(std::span<const Integer> terms, std::int64_t s, bool reverse
 
 namespace hgcd {
 
-// One run of the subtractive Euclid: q times R (α −= qβ) or q times L (β −= qα). Neighbouring
-// runs may share a side (a partial quotient split across levels); they are merged at the end.
-struct Step {
-  Integer q;
-  bool r_side;
+using detail::mpz;
+
+// The runs found so far: q times R (al −= q·be) or q times L (be −= q·al). Neighbouring runs
+// may share a side (a partial quotient split across levels); they are merged at the end.
+// Quotients that fit a word are kept as words (almost all of them: Gauss–Kuzmin), the rare
+// big ones in a side list, so that recording a quotient does not allocate.
+class Runs {
+ public:
+  explicit Runs(std::size_t expected) { runs_.reserve(expected); }
+  std::size_t size() const noexcept { return runs_.size(); }
+  bool empty() const noexcept { return runs_.empty(); }
+  bool back_is_r() const noexcept { return runs_.back().r_side; }
+  void push(std::uint64_t q, bool r_side) { runs_.push_back({q, r_side, false}); }
+  void push(Integer q, bool r_side) {
+    if (mpz_fits_ulong_p(mpz(q)) != 0) return push(mpz_get_ui(mpz(q)), r_side);
+    big_.push_back(std::move(q));
+    runs_.push_back({0, r_side, true});
+  }
+  void pop() {
+    if (runs_.back().big) big_.pop_back();
+    runs_.pop_back();
+  }
+  // target += sign·q·factor for the last run's q.
+  void addmul_back(mpz_ptr target, mpz_srcptr factor, bool add) const {
+    const Run& r = runs_.back();
+    if (r.big) {
+      (add ? mpz_addmul : mpz_submul)(target, mpz(big_.back()), factor);
+    } else {
+      (add ? mpz_addmul_ui : mpz_submul_ui)(target, factor, r.q);
+    }
+  }
+  // The partial quotients, merging runs of one side (the first run is R).
+  void append_terms(Terms& out) {
+    bool have = false, side = true;
+    std::size_t b = 0;
+    for (const Run& r : runs_) {
+      Integer q = r.big ? std::move(big_[b++]) : Integer(r.q);
+      if (q == 0) continue;
+      if (have && r.r_side == side) {
+        out.back() += q;
+      } else {
+        out.push_back(std::move(q));
+        side = r.r_side;
+        have = true;
+      }
+    }
+  }
+
+ private:
+  struct Run {
+    std::uint64_t q;
+    bool r_side;
+    bool big;  // q is big_.back()-ordered: the i-th big run holds big_[i]
+  };
+  std::vector<Run> runs_;
+  std::vector<Integer> big_;
 };
 
-// (A; B) = M (al; be) with M = (u v; w x), det M = 1, non-negative entries.
+// (A; B) = M (al; be) with M = (u v; w x), det M = 1, non-negative entries; t0..t5 scratch.
 struct State {
   Integer al, be;
   Integer u{1}, v{0}, w{0}, x{1};
+  Integer t0, t1, t2, t3, t4, t5;
 };
 
-std::size_t bits(const Integer& z) { return mpz_sizeinbase(detail::mpz(z), 2); }
+std::size_t bits(const Integer& z) { return mpz_sizeinbase(mpz(z), 2); }
 
 bool safe(const State& s) { return s.al >= s.v && s.be >= s.w; }
 
 // ⌊z / 2^k⌋ for z ≥ 0 when it fits in 64 bits, read straight from the limbs.
 std::uint64_t top_word(const Integer& z, std::size_t k) {
-  mpz_srcptr p = detail::mpz(z);
+  mpz_srcptr p = mpz(z);
   const auto n = static_cast<std::size_t>(mpz_size(p));
   const std::size_t limb = k / 64, off = k % 64;
   if (limb >= n) return 0;
@@ -176,69 +228,70 @@ std::uint64_t top_word(const Integer& z, std::size_t k) {
 }
 
 void apply_r(State& s, const Integer& j) {
-  mpz_submul(detail::mpz(s.al), detail::mpz(j), detail::mpz(s.be));
-  mpz_addmul(detail::mpz(s.v), detail::mpz(j), detail::mpz(s.u));
-  mpz_addmul(detail::mpz(s.x), detail::mpz(j), detail::mpz(s.w));
+  mpz_submul(mpz(s.al), mpz(j), mpz(s.be));
+  mpz_addmul(mpz(s.v), mpz(j), mpz(s.u));
+  mpz_addmul(mpz(s.x), mpz(j), mpz(s.w));
 }
 void apply_l(State& s, const Integer& j) {
-  mpz_submul(detail::mpz(s.be), detail::mpz(j), detail::mpz(s.al));
-  mpz_addmul(detail::mpz(s.u), detail::mpz(j), detail::mpz(s.v));
-  mpz_addmul(detail::mpz(s.w), detail::mpz(j), detail::mpz(s.x));
+  mpz_submul(mpz(s.be), mpz(j), mpz(s.al));
+  mpz_addmul(mpz(s.u), mpz(j), mpz(s.v));
+  mpz_addmul(mpz(s.w), mpz(j), mpz(s.x));
 }
-void undo(State& s, const Step& st) {
-  if (st.r_side) {
-    mpz_addmul(detail::mpz(s.al), detail::mpz(st.q), detail::mpz(s.be));
-    mpz_submul(detail::mpz(s.v), detail::mpz(st.q), detail::mpz(s.u));
-    mpz_submul(detail::mpz(s.x), detail::mpz(st.q), detail::mpz(s.w));
+// Undo the last run and drop it.
+void undo_back(State& s, Runs& runs) {
+  if (runs.back_is_r()) {
+    runs.addmul_back(mpz(s.al), mpz(s.be), true);
+    runs.addmul_back(mpz(s.v), mpz(s.u), false);
+    runs.addmul_back(mpz(s.x), mpz(s.w), false);
   } else {
-    mpz_addmul(detail::mpz(s.be), detail::mpz(st.q), detail::mpz(s.al));
-    mpz_submul(detail::mpz(s.u), detail::mpz(st.q), detail::mpz(s.v));
-    mpz_submul(detail::mpz(s.w), detail::mpz(st.q), detail::mpz(s.x));
+    runs.addmul_back(mpz(s.be), mpz(s.al), true);
+    runs.addmul_back(mpz(s.u), mpz(s.v), false);
+    runs.addmul_back(mpz(s.w), mpz(s.x), false);
   }
+  runs.pop();
 }
 
-// The longest single run that keeps P: for an R-run, al − jβ ≥ v + ju gives
+// The longest single run that keeps P: for an R-run, al − j·be ≥ v + j·u gives
 // j = ⌊(al − v)/(be + u)⌋ (never above the true quotient ⌊al/be⌋). Returns false if j = 0.
-bool direct_step(State& s, std::vector<Step>& steps) {
-  Integer j;
+bool direct_step(State& s, Runs& runs) {
+  Integer& j = s.t0;
   if (s.al > s.be) {
-    j = (s.al - s.v) / (s.be + s.u);
+    mpz_sub(mpz(s.t1), mpz(s.al), mpz(s.v));
+    mpz_add(mpz(s.t2), mpz(s.be), mpz(s.u));
+    mpz_fdiv_q(mpz(j), mpz(s.t1), mpz(s.t2));
     if (j == 0) return false;
     apply_r(s, j);
-    steps.push_back({std::move(j), true});
+    runs.push(j, true);
   } else if (s.be > s.al) {
-    j = (s.be - s.w) / (s.al + s.x);
+    mpz_sub(mpz(s.t1), mpz(s.be), mpz(s.w));
+    mpz_add(mpz(s.t2), mpz(s.al), mpz(s.x));
+    mpz_fdiv_q(mpz(j), mpz(s.t1), mpz(s.t2));
     if (j == 0) return false;
     apply_l(s, j);
-    steps.push_back({std::move(j), false});
+    runs.push(j, false);
   } else {
     return false;
   }
   return true;
 }
 
-// Undo steps (back to index `first` at most) until P holds again, then redo the longest safe
-// part of the last undone run. Precondition: P held when steps.size() was `first`.
-void correct(State& s, std::vector<Step>& steps, std::size_t first) {
+// Undo runs until P holds again, then redo the longest safe part of the last undone run.
+// P held when there were `first` runs, so the undoing stops there at the latest.
+void correct(State& s, Runs& runs, std::size_t first) {
   if (safe(s)) return;
-  // P held at `first`, so the loop stops there at the latest.
-  while (!safe(s) && steps.size() > first) {
-    undo(s, steps.back());
-    steps.pop_back();
-  }
-  (void)direct_step(s, steps);  // P-limited, so it cannot overshoot again
+  while (!safe(s) && runs.size() > first) undo_back(s, runs);
+  (void)direct_step(s, runs);  // P-limited, so it cannot overshoot again
 }
 
 // One Lehmer step: run the P-limited Euclid on the leading t ≤ 62 bits in words (P on the
 // words makes the word matrix valid for the whole pair, by the lemma), apply the word matrix
 // with single-limb multiplications, then correct against P for the whole state.
-// Returns false when the words admit no step.
-bool lehmer_step(State& s, std::vector<Step>& steps, std::size_t t, std::size_t first) {
+void lehmer_step(State& s, Runs& runs, std::size_t t, std::size_t first) {
   const std::size_t n = std::max(bits(s.al), bits(s.be));
   const std::size_t k = n > t ? n - t : 0;
   std::uint64_t a = top_word(s.al, k), b = top_word(s.be, k);
   std::uint64_t U = 1, V = 0, W = 0, X = 1;
-  const std::size_t mark = steps.size();
+  const std::size_t mark = runs.size();
   // Word invariants: a, b < 2^62 and every entry ≤ the original top words, so b + U, a + X
   // and the updates below stay below 2^63.
   while (true) {
@@ -246,37 +299,37 @@ bool lehmer_step(State& s, std::vector<Step>& steps, std::size_t t, std::size_t 
       if (a - V < b + U) break;
       const std::uint64_t j = (a - V) / (b + U);
       a -= j * b, V += j * U, X += j * W;
-      steps.push_back({Integer(j), true});
+      runs.push(j, true);
     } else if (b > a) {
       if (b - W < a + X) break;
       const std::uint64_t j = (b - W) / (a + X);
       b -= j * a, U += j * V, W += j * X;
-      steps.push_back({Integer(j), false});
+      runs.push(j, false);
     } else {
       break;
     }
   }
-  if (steps.size() == mark) return false;
+  if (runs.size() == mark) return;
   // (al; be) ← (X·al − V·be; U·be − W·al);  M ← M·(U V; W X).
-  Integer na, nb;
-  mpz_mul_ui(detail::mpz(na), detail::mpz(s.al), X);
-  mpz_submul_ui(detail::mpz(na), detail::mpz(s.be), V);
-  mpz_mul_ui(detail::mpz(nb), detail::mpz(s.be), U);
-  mpz_submul_ui(detail::mpz(nb), detail::mpz(s.al), W);
-  s.al = std::move(na);
-  s.be = std::move(nb);
-  Integer nu, nv, nw, nx;
-  mpz_mul_ui(detail::mpz(nu), detail::mpz(s.u), U);
-  mpz_addmul_ui(detail::mpz(nu), detail::mpz(s.v), W);
-  mpz_mul_ui(detail::mpz(nv), detail::mpz(s.u), V);
-  mpz_addmul_ui(detail::mpz(nv), detail::mpz(s.v), X);
-  mpz_mul_ui(detail::mpz(nw), detail::mpz(s.w), U);
-  mpz_addmul_ui(detail::mpz(nw), detail::mpz(s.x), W);
-  mpz_mul_ui(detail::mpz(nx), detail::mpz(s.w), V);
-  mpz_addmul_ui(detail::mpz(nx), detail::mpz(s.x), X);
-  s.u = std::move(nu), s.v = std::move(nv), s.w = std::move(nw), s.x = std::move(nx);
-  correct(s, steps, first);
-  return true;
+  mpz_mul_ui(mpz(s.t0), mpz(s.al), X);
+  mpz_submul_ui(mpz(s.t0), mpz(s.be), V);
+  mpz_mul_ui(mpz(s.t1), mpz(s.be), U);
+  mpz_submul_ui(mpz(s.t1), mpz(s.al), W);
+  mpz_swap(mpz(s.al), mpz(s.t0));
+  mpz_swap(mpz(s.be), mpz(s.t1));
+  mpz_mul_ui(mpz(s.t0), mpz(s.u), U);
+  mpz_addmul_ui(mpz(s.t0), mpz(s.v), W);
+  mpz_mul_ui(mpz(s.t1), mpz(s.u), V);
+  mpz_addmul_ui(mpz(s.t1), mpz(s.v), X);
+  mpz_mul_ui(mpz(s.t2), mpz(s.w), U);
+  mpz_addmul_ui(mpz(s.t2), mpz(s.x), W);
+  mpz_mul_ui(mpz(s.t3), mpz(s.w), V);
+  mpz_addmul_ui(mpz(s.t3), mpz(s.x), X);
+  mpz_swap(mpz(s.u), mpz(s.t0));
+  mpz_swap(mpz(s.v), mpz(s.t1));
+  mpz_swap(mpz(s.w), mpz(s.t2));
+  mpz_swap(mpz(s.x), mpz(s.t3));
+  correct(s, runs, first);
 }
 
 // Below this many leading bits a recursive call does not pay; Lehmer steps take over.
@@ -284,96 +337,98 @@ constexpr std::size_t kRecurseBits = 1200;
 // Operand sizes differing by this many bits mean a big quotient: one direct division instead.
 constexpr std::size_t kDirectGap = 32;
 
-// Reduce s (which starts with M = I) as far as P allows; appends the runs to `steps`.
-void reduce(State& s, std::vector<Step>& steps) {
-  const std::size_t first = steps.size();
+// Reduce s (which starts with M = I) as far as P allows; appends the runs to `runs`.
+void reduce(State& s, Runs& runs) {
+  const std::size_t first = runs.size();
   const std::size_t n0 = std::max(bits(s.al), bits(s.be));
   while (true) {
     const std::size_t big = std::max(bits(s.al), bits(s.be));
     const std::size_t small = std::min(bits(s.al), bits(s.be));
     if (big - small >= kDirectGap) {
-      if (!direct_step(s, steps)) return;
+      if (!direct_step(s, runs)) return;
       continue;
     }
     const std::size_t e = std::max({bits(s.u), bits(s.v), bits(s.w), bits(s.x)});
     // P allows roughly (small − e)/2 more bits of reduction (remainders shrink as entries grow).
     const std::size_t room = small > e + 2 ? (small - e - 2) / 2 : 0;
     if (room < 2) {
-      if (!direct_step(s, steps)) return;
+      if (!direct_step(s, runs)) return;
       continue;
     }
     // Leading part for the recursive call: at most half of the original size (so the call
     // really is smaller), at most 2·room minus a margin (so it does not overshoot P).
     const std::size_t sub = std::min((n0 + 1) / 2, 2 * room > 64 ? 2 * room - 32 : 0);
+    // P held before each attempt, so a correction never goes below `mark`: an attempt made
+    // progress exactly when runs remain above it. Otherwise one direct step.
+    const std::size_t mark = runs.size();
     if (sub < kRecurseBits) {
-      const Integer before = s.al;
-      const Integer before_b = s.be;
-      // No net progress (no word step, or the correction undid them all): one direct step.
-      if (!lehmer_step(s, steps, std::min<std::size_t>(62, 2 * room), first) ||
-          (s.al == before && s.be == before_b)) {
-        if (!direct_step(s, steps)) return;
-      }
+      lehmer_step(s, runs, std::min<std::size_t>(62, 2 * room), first);
+      if (runs.size() == mark && !direct_step(s, runs)) return;
       continue;
     }
     const std::size_t k = big - sub;
     State t;
-    mpz_fdiv_q_2exp(detail::mpz(t.al), detail::mpz(s.al), k);
-    mpz_fdiv_q_2exp(detail::mpz(t.be), detail::mpz(s.be), k);
-    const std::size_t mark = steps.size();
-    reduce(t, steps);
-    if (steps.size() == mark) {
-      if (!direct_step(s, steps)) return;
+    mpz_fdiv_q_2exp(mpz(t.al), mpz(s.al), k);
+    mpz_fdiv_q_2exp(mpz(t.be), mpz(s.be), k);
+    reduce(t, runs);
+    if (runs.size() == mark) {
+      if (!direct_step(s, runs)) return;
       continue;
     }
     // New remainders from the low parts: (al; be) = 2^k (t.al; t.be) + T⁻¹(al_lo; be_lo),
     // T⁻¹ = (x −v; −w u). Positive by the lemma.
-    Integer lo_a, lo_b;
-    mpz_fdiv_r_2exp(detail::mpz(lo_a), detail::mpz(s.al), k);
-    mpz_fdiv_r_2exp(detail::mpz(lo_b), detail::mpz(s.be), k);
-    mpz_mul_2exp(detail::mpz(s.al), detail::mpz(t.al), k);
-    mpz_addmul(detail::mpz(s.al), detail::mpz(t.x), detail::mpz(lo_a));
-    mpz_submul(detail::mpz(s.al), detail::mpz(t.v), detail::mpz(lo_b));
-    mpz_mul_2exp(detail::mpz(s.be), detail::mpz(t.be), k);
-    mpz_addmul(detail::mpz(s.be), detail::mpz(t.u), detail::mpz(lo_b));
-    mpz_submul(detail::mpz(s.be), detail::mpz(t.w), detail::mpz(lo_a));
-    assert(s.al > 0 && s.be > 0);
+    mpz_fdiv_r_2exp(mpz(s.t0), mpz(s.al), k);
+    mpz_fdiv_r_2exp(mpz(s.t1), mpz(s.be), k);
+    mpz_mul_2exp(mpz(s.al), mpz(t.al), k);
+    mpz_addmul(mpz(s.al), mpz(t.x), mpz(s.t0));
+    mpz_submul(mpz(s.al), mpz(t.v), mpz(s.t1));
+    mpz_mul_2exp(mpz(s.be), mpz(t.be), k);
+    mpz_addmul(mpz(s.be), mpz(t.u), mpz(s.t1));
+    mpz_submul(mpz(s.be), mpz(t.w), mpz(s.t0));
     // M ← M·T.
-    Integer nu = s.u * t.u + s.v * t.w, nv = s.u * t.v + s.v * t.x;
-    Integer nw = s.w * t.u + s.x * t.w, nx = s.w * t.v + s.x * t.x;
-    s.u = std::move(nu), s.v = std::move(nv), s.w = std::move(nw), s.x = std::move(nx);
-    const std::size_t before = steps.size();
-    correct(s, steps, first);
-    // If the correction went back below where the call started, no net progress: stop here
-    // with a direct step (or return) rather than repeat the same call.
-    if (steps.size() < before && steps.size() <= mark) {
-      if (!direct_step(s, steps)) return;
-    }
+    mpz_mul(mpz(s.t0), mpz(s.u), mpz(t.u));
+    mpz_addmul(mpz(s.t0), mpz(s.v), mpz(t.w));
+    mpz_mul(mpz(s.t1), mpz(s.u), mpz(t.v));
+    mpz_addmul(mpz(s.t1), mpz(s.v), mpz(t.x));
+    mpz_mul(mpz(s.t2), mpz(s.w), mpz(t.u));
+    mpz_addmul(mpz(s.t2), mpz(s.x), mpz(t.w));
+    mpz_mul(mpz(s.t3), mpz(s.w), mpz(t.v));
+    mpz_addmul(mpz(s.t3), mpz(s.x), mpz(t.x));
+    mpz_swap(mpz(s.u), mpz(s.t0));
+    mpz_swap(mpz(s.v), mpz(s.t1));
+    mpz_swap(mpz(s.w), mpz(s.t2));
+    mpz_swap(mpz(s.x), mpz(s.t3));
+    correct(s, runs, first);
+    if (runs.size() == mark && !direct_step(s, runs)) return;
   }
 }
 
 // Partial quotients of A/B for A > B > 0 coprime (the terms a1, ..., an of the regular
 // expansion), appended to `out`.
 void expand(Integer A, Integer B, Terms& out) {
-  std::vector<Step> steps;
+  // About 0.584 quotients a bit (Lévy's constant: log2 of the growth is π²/(12 ln 2)·log2 e).
+  const std::size_t expected = bits(B) * 6 / 10 + 16;
+  Runs runs(expected);
+  out.reserve(out.size() + expected);
+  Integer q;
   auto full_step = [&](Integer& big, const Integer& small, bool r_side) {
-    Integer q;
-    mpz_fdiv_qr(detail::mpz(q), detail::mpz(big), detail::mpz(big), detail::mpz(small));
-    steps.push_back({std::move(q), r_side});
+    mpz_fdiv_qr(mpz(q), mpz(big), mpz(big), mpz(small));
+    runs.push(q, r_side);
   };
   while (B != 0 && A != 0) {
     const std::size_t na = bits(A), nb = bits(B);
     if (na <= 64 && nb <= 64) {
-      // Word Euclid to the end. A tie (1, 1) can only be the very last step: it extends the
-      // previous run, so that the last quotient is ≥ 2 as the regular expansion requires.
+      // Word Euclid to the end. A tie (1, 1) could only be the very last step: it extends
+      // the previous run, so that the last quotient is ≥ 2 as the regular expansion requires.
       std::uint64_t a = top_word(A, 0), b = top_word(B, 0);
-      bool side = steps.empty() || steps.back().r_side;
+      bool side = runs.empty() || runs.back_is_r();
       while (a != 0 && b != 0) {
         if (a != b) side = a > b;
         if (side) {
-          steps.push_back({Integer(a / b), true});
+          runs.push(a / b, true);
           a %= b;
         } else {
-          steps.push_back({Integer(b / a), false});
+          runs.push(b / a, false);
           b %= a;
         }
       }
@@ -384,28 +439,17 @@ void expand(Integer A, Integer B, Terms& out) {
       continue;
     }
     State s;
-    s.al = std::move(A);
-    s.be = std::move(B);
-    const std::size_t mark = steps.size();
-    reduce(s, steps);
-    A = std::move(s.al);
-    B = std::move(s.be);
-    if (steps.size() == mark) {
+    mpz_swap(mpz(s.al), mpz(A));
+    mpz_swap(mpz(s.be), mpz(B));
+    const std::size_t mark = runs.size();
+    reduce(s, runs);
+    mpz_swap(mpz(s.al), mpz(A));
+    mpz_swap(mpz(s.be), mpz(B));
+    if (runs.size() == mark) {
       if (A > B) full_step(A, B, true); else full_step(B, A, false);
     }
   }
-  // Merge runs of one side; the first run is R since A > B.
-  bool have = false, side = true;
-  for (Step& st : steps) {
-    if (st.q == 0) continue;
-    if (have && st.r_side == side) {
-      out.back() += st.q;
-    } else {
-      out.push_back(std::move(st.q));
-      side = st.r_side;
-      have = true;
-    }
-  }
+  runs.append_terms(out);
 }
 
 }  // namespace hgcd
