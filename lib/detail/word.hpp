@@ -175,9 +175,12 @@ struct ExtendedGcd {
   return r;
 }
 
-/// The value as a signed 128-bit word when it fits.
+/// The value as a signed 128-bit word when it fits (−2^127 included).
 [[nodiscard]] inline std::optional<i128> int128_of(const Integer& x) {
-  if (mpz_sizeinbase(mpz(x), 2) > 127) return std::nullopt;
+  const std::size_t n = mpz_sizeinbase(mpz(x), 2);
+  if (n == 128 && x.sign() < 0 && mpz_scan1(mpz(x), 0) == 127)
+    return static_cast<i128>(u128{1} << 127);  // −2^127: the one 128-bit magnitude that fits
+  if (n > 127) return std::nullopt;
   const Integer m = abs(x);
   const std::uint64_t lo = mpz_getlimbn(mpz(m), 0);
   const std::uint64_t hi = mpz_size(mpz(m)) > 1 ? mpz_getlimbn(mpz(m), 1) : 0;
