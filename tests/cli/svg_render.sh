@@ -12,7 +12,7 @@ if [[ -z "$browser" ]]; then
   echo "skipped: chromium not installed"
   exit 0
 fi
-if ! "$tool" diagram --help >/dev/null 2>&1; then
+if ! "$tool" --help 2>/dev/null | grep -qE '^[[:space:]]+diagram[[:space:]]'; then
   echo "skipped: this build of the tool has no diagram command"
   exit 0
 fi
