@@ -7,6 +7,7 @@
 #include <cstring>
 #include <stdexcept>
 
+#include "fourplat/coloring.hpp"
 #include "fourplat/parse.hpp"
 
 namespace fourplat::app {
@@ -203,6 +204,81 @@ void print_link(const TwoBridgeLink& l, const OrientedTwoBridgeLink* oriented, s
 OrientedTwoBridgeLink oriented_closure(const RationalTangle& t, Closure which) {
   if (which == Closure::numerator) return OrientedTwoBridgeLink::numerator_closure(t.fraction());
   return OrientedTwoBridgeLink::numerator_closure(-t.fraction().reciprocal());
+}
+
+namespace {
+TwistSequence drawn(const RationalTangle& t, bool canonical) {
+  return canonical ? t.canonical_twists() : t.twists();
+}
+}  // namespace
+
+Integer diagram_crossings(const TangleSum& s, bool canonical) {
+  Integer n = 0;
+  for (const RationalTangle& t : s.summands()) {
+    for (const Integer& a : drawn(t, canonical).twists) n += abs(a);
+  }
+  return n;
+}
+
+Diagram draw_diagram(const TangleSum& s, DiagramClosure closure, bool canonical) {
+  const Integer n = diagram_crossings(s, canonical);
+  if (n > kMaxToolCrossings) {
+    throw LimitError("the diagram would have " + n.str() + " crossings; the tool draws at most " +
+                     std::to_string(kMaxToolCrossings));
+  }
+  if (s.summands().size() == 1) return Diagram::of_twists(drawn(s.summands().front(), canonical), closure);
+  std::vector<TwistSequence> parts;
+  for (const RationalTangle& t : s.summands()) parts.push_back(drawn(t, canonical));
+  return Diagram::of_sum(parts, closure);
+}
+
+std::string drawn_twists(const TangleSum& s, bool canonical) {
+  std::string out;
+  for (const RationalTangle& t : s.summands()) {
+    if (!out.empty()) out += " + ";
+    out += to_string(drawn(t, canonical));
+  }
+  return out;
+}
+
+Integer read_modulus(const std::string& text) {
+  Integer n;
+  try {
+    n = parse_integer(text);
+  } catch (const ParseError& e) {
+    throw ParseError(e.position(), "bad modulus " + quoted(text) + ": " + e.what());
+  }
+  if (n <= 0) throw DomainError("the modulus must be a positive integer, not " + n.str());
+  return n;
+}
+
+std::optional<std::vector<Integer>> diagram_witness(const TangleSum& s, const Diagram& d, const Integer& n) {
+  return s.summands().size() == 1 ? propagated_witness(d, n) : coloring_witness(d, n);
+}
+
+std::string read_file_or_stdin(const std::string& path) {
+  std::string text;
+  std::FILE* f = path == "-" ? stdin : std::fopen(path.c_str(), "rb");
+  if (f == nullptr) throw Error("cannot open " + quoted(path) + ": " + std::strerror(errno));
+  std::vector<char> buf(std::size_t{1} << 16);
+  std::size_t n = 0;
+  while ((n = std::fread(buf.data(), 1, buf.size(), f)) > 0) text.append(buf.data(), n);
+  const bool failed = std::ferror(f) != 0;
+  if (f != stdin) std::fclose(f);
+  if (failed) throw Error("cannot read " + quoted(path));
+  return text;
+}
+
+void write_file_or_stdout(const std::string& path, std::string_view text) {
+  if (path.empty() || path == "-") {
+    Output::get().write(text);
+    return;
+  }
+  std::FILE* f = std::fopen(path.c_str(), "wb");
+  // Failing to write is not bad input: std::runtime_error, exit status 1.
+  if (f == nullptr) throw std::runtime_error("cannot write " + quoted(path) + ": " + std::strerror(errno));
+  const bool ok = std::fwrite(text.data(), 1, text.size(), f) == text.size();
+  if (std::fclose(f) != 0 || !ok) throw std::runtime_error("cannot write " + quoted(path));
 }
 
 void add_closure_option(CLI::App& app, Closure& closure) {

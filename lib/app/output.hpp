@@ -5,6 +5,7 @@
 #include <cstddef>
 #include <cstdint>
 #include <cstdio>
+#include <optional>
 #include <iterator>
 #include <string>
 #include <string_view>
@@ -15,6 +16,7 @@
 #include <nlohmann/json.hpp>
 
 #include "fourplat/algebraic.hpp"
+#include "fourplat/diagram.hpp"
 #include "fourplat/error.hpp"
 #include "fourplat/integer.hpp"
 #include "fourplat/tangle.hpp"
@@ -88,6 +90,31 @@ Json link_json(const TwoBridgeLink& l, const OrientedTwoBridgeLink* oriented);
 void print_link(const TwoBridgeLink& l, const OrientedTwoBridgeLink* oriented, std::string_view indent);
 /// The oriented closure of a rational tangle: N(F), or D(F) = N(−1/F) as oriented links.
 OrientedTwoBridgeLink oriented_closure(const RationalTangle& t, Closure which);
+
+/// The largest diagram the tool builds (a witness or a code needs the diagram in memory:
+/// about 200 bytes a crossing).
+inline constexpr std::int64_t kMaxToolCrossings = 2000000;
+
+/// Number of crossings of the diagram draw_diagram would build (without building it).
+Integer diagram_crossings(const TangleSum& s, bool canonical);
+/// The standard diagram of the tangle as written: a single tangle from its given twists (or its
+/// canonical ones, for a fraction or with `canonical`), a sum from its summands left to right.
+/// Throws LimitError above kMaxToolCrossings.
+Diagram draw_diagram(const TangleSum& s, DiagramClosure closure, bool canonical);
+/// What draw_diagram draws, for messages: "[2 1 2]" or "3/5 + [2 1]" (canonical twists shown).
+std::string drawn_twists(const TangleSum& s, bool canonical);
+
+/// A --modulus value: a positive decimal integer of any size (ParseError / DomainError if not).
+Integer read_modulus(const std::string& text);
+/// A non-constant n-coloring of a closed diagram drawn by draw_diagram(s, ...), one color per
+/// arc: integer propagation through a single rational tangle (Kauffman–Lambropoulou), the Smith
+/// form of the coloring matrix for a sum. nullopt when only constant colorings exist.
+std::optional<std::vector<Integer>> diagram_witness(const TangleSum& s, const Diagram& d, const Integer& n);
+
+/// Reads a whole file, or standard input for "-"; throws Error if it cannot.
+std::string read_file_or_stdin(const std::string& path);
+/// Writes text to a file (replacing it), or to standard output for "" or "-".
+void write_file_or_stdout(const std::string& path, std::string_view text);
 
 /// Adds --closure numerator|denominator to a command.
 void add_closure_option(CLI::App& app, Closure& closure);
