@@ -76,8 +76,32 @@ std::vector<Mat> leaf_products(std::span<const Integer> terms, std::int64_t s, b
 // halves the count, so the sizes stay balanced and GMP's subquadratic multiplication does the
 // work: O(M(N) log N) for an N-bit result, against O(N²) for the sequential recurrence.
 // Returns (p, q) normalised as a Fraction is (q ≥ 0; ∞ as 1/0); coprime since det = ±1.
+// Short sequences of word terms whose value fits a word: the recurrence on checked int64, with
+// no allocation; nullopt as soon as anything does not fit.
+std::optional<ValueParts> word_parts(std::span<const Integer> terms, std::int64_t s,
+                                     bool reversed) {
+  if (terms.size() > 64) return std::nullopt;
+  // Back to front: (p, q) ← (t·p + s·q, p), from (t_last, 1).
+  std::int64_t p = 1, q = 0;
+  const std::size_t n = terms.size();
+  for (std::size_t i = n; i-- > 0;) {
+    const auto t = word_of(terms[reversed ? n - 1 - i : i]);
+    std::int64_t sq, np;
+    if (!t || !detail::try_mul(s, q, sq) || !detail::try_mul_add(*t, p, sq, np)) return std::nullopt;
+    q = p;
+    p = np;
+  }
+  if (q < 0) {
+    if (!detail::try_neg(p, p) || !detail::try_neg(q, q)) return std::nullopt;
+  } else if (q == 0) {
+    p = 1;
+  }
+  return ValueParts{Integer(p), Integer(q)};
+}
+
 ValueParts tree_parts(std::span<const Integer> terms, std::int64_t s, bool reversed) {
   if (terms.empty()) throw DomainError("the value of an empty continued fraction is undefined");
+  if (auto w = word_parts(terms, s, reversed)) return std::move(*w);
   std::vector<Mat> level = leaf_products(terms, s, reversed);
   while (level.size() > 2) {
     std::vector<Mat> next;
@@ -660,6 +684,10 @@ Fraction negative_value(std::span<const Integer> terms) { return tree_value(term
 
 Integer twist_crossings(const Fraction& x) {
   if (x.is_infinite()) return 0;
+  // Word path: the sum of partial quotients of |p|/q, no allocation (the sum fits: see
+  // detail::partial_quotient_sum).
+  if (const auto p = word_of(x.numerator()), q = word_of(x.denominator()); p && q)
+    return Integer(detail::partial_quotient_sum(detail::magnitude(*p), static_cast<std::uint64_t>(*q)));
   Integer sum = 0;
   for (const Integer& a : abs_expansion(x)) sum += a;
   return sum;
