@@ -99,58 +99,75 @@ std::vector<Integer> coloring_invariant_factors(const Diagram& d) {
   return smith_of(d).nontrivial_factors();
 }
 
-std::optional<std::vector<Integer>> propagated_witness(const Diagram& d, const Integer& n) {
-  check_modulus(n);
-  check_closed(d);
-  if (d.summands().size() != 1)
-    throw DomainError("propagated witnesses are for the diagram of one rational tangle; use coloring_witness for sums");
-  // The closure joins ends whose integer colors (seeds 0, 1) differ by a − b (N) or c − a (D).
-  const EndColors e = end_colors(d);
-  const Integer diff = d.closure() == DiagramClosure::numerator ? Integer(e.nw - e.ne) : Integer(e.sw - e.nw);
-  const Integer g = gcd(n, diff);
-  if (g == 1) return std::nullopt;
-  const Integer t = mod_floor(n / g, n);
+namespace {
 
-  // Propagate colors mod n from the seed colors 0 and t, box by box (as end_colors does over Z).
+/// Propagates Fox colors mod n through the one summand of d from the seed colors 0 and t, box by
+/// box (as end_colors does over Z), and returns the end colors (NW, NE, SW, SE). When `arc` is
+/// given, every arc met receives its color; `ok` turns false if an arc would get two colors.
+std::array<Integer, 4> propagate_mod(const Diagram& d, const Integer& n, const Integer& t,
+                                     std::vector<Integer>* arc, bool& ok) {
   const Summand& s = d.summands()[0];
   std::array<Integer, 4> col;
   if (s.seed_infinity) col = {Integer(0), t, Integer(0), t};
   else col = {Integer(0), Integer(0), t, t};
-  std::vector<Integer> arc(d.arcs().size(), Integer(-1));
-  bool ok = true;
   auto assign = [&](std::int64_t a, const Integer& v) {
-    Integer& slot = arc[static_cast<std::size_t>(a)];
+    Integer& slot = (*arc)[static_cast<std::size_t>(a)];
     if (slot < 0) slot = v;
     else if (slot != v) ok = false;
   };
+  std::array<Integer, 4> corner;
   for (std::size_t bi = s.first_box; bi < s.first_box + s.boxes; ++bi) {
     const TwistBox& b = d.boxes()[bi];
     const bool horizontal = b.kind == BoxKind::horizontal;
     Integer& first = horizontal ? col[ci(Corner::ne)] : col[ci(Corner::sw)];
     Integer& second = col[ci(Corner::se)];
     for (std::int64_t k = 0; k < b.crossings; ++k) {
-      const Crossing& x = d.crossings()[static_cast<std::size_t>(b.first_crossing + k)];
-      std::array<Integer, 4> corner;
-      const Integer g1 = first, g2 = second;
       Integer o1, o2;  // the new first and second ends
-      if (b.twists > 0) { o2 = g1; o1 = mod_floor(2 * g1 - g2, n); }  // over NW–SE
-      else { o1 = g2; o2 = mod_floor(2 * g2 - g1, n); }               // over NE–SW
-      corner[ci(Corner::nw)] = g1;
-      corner[ci(horizontal ? Corner::sw : Corner::ne)] = g2;
-      corner[ci(horizontal ? Corner::ne : Corner::sw)] = o1;
-      corner[ci(Corner::se)] = o2;
-      assign(x.over_arc, corner[ci(x.over_in)]);
-      assign(x.over_arc, corner[ci(x.over_out)]);
-      assign(x.under_in_arc, corner[ci(x.under_in)]);
-      assign(x.under_out_arc, corner[ci(x.under_out)]);
+      if (b.twists > 0) { o2 = first; o1 = mod_floor(2 * first - second, n); }  // over NW–SE
+      else { o1 = second; o2 = mod_floor(2 * second - first, n); }             // over NE–SW
+      if (arc != nullptr) {
+        const Crossing& x = d.crossings()[static_cast<std::size_t>(b.first_crossing + k)];
+        corner[ci(Corner::nw)] = first;
+        corner[ci(horizontal ? Corner::sw : Corner::ne)] = second;
+        corner[ci(horizontal ? Corner::ne : Corner::sw)] = o1;
+        corner[ci(Corner::se)] = o2;
+        assign(x.over_arc, corner[ci(x.over_in)]);
+        assign(x.over_arc, corner[ci(x.over_out)]);
+        assign(x.under_in_arc, corner[ci(x.under_in)]);
+        assign(x.under_out_arc, corner[ci(x.under_out)]);
+      }
       first = std::move(o1);
       second = std::move(o2);
     }
   }
-  for (Corner end : {Corner::nw, Corner::ne, Corner::sw, Corner::se}) {
-    const std::int64_t a = d.end_arc(end);
-    if (a >= 0) assign(a, col[ci(end)]);
-  }
+  if (arc != nullptr)
+    for (Corner end : {Corner::nw, Corner::ne, Corner::sw, Corner::se}) {
+      const std::int64_t a = d.end_arc(end);
+      if (a >= 0) assign(a, col[ci(end)]);
+    }
+  return col;
+}
+
+}  // namespace
+
+std::optional<std::vector<Integer>> propagated_witness(const Diagram& d, const Integer& n) {
+  check_modulus(n);
+  check_closed(d);
+  if (d.summands().size() != 1)
+    throw DomainError("propagated witnesses are for the diagram of one rational tangle; use coloring_witness for sums");
+  // Pass 1, seeds 0 and 1: the closure joins ends whose colors differ by a − b (N) or c − a (D),
+  // which is ±p (resp. ±q) — the end colors are a unimodular image of the seeds. Working mod n
+  // keeps this linear in the number of crossings.
+  bool ok = true;
+  const auto e = propagate_mod(d, n, mod_floor(Integer(1), n), nullptr, ok);
+  const Integer diff = d.closure() == DiagramClosure::numerator
+                           ? Integer(e[ci(Corner::nw)] - e[ci(Corner::ne)])
+                           : Integer(e[ci(Corner::sw)] - e[ci(Corner::nw)]);
+  const Integer g = gcd(n, diff);
+  if (g == 1) return std::nullopt;
+  // Pass 2, seeds 0 and t = n/g: now t·diff ≡ 0, so the closure arcs match mod n.
+  std::vector<Integer> arc(d.arcs().size(), Integer(-1));
+  (void)propagate_mod(d, n, mod_floor(n / g, n), &arc, ok);
   if (!ok) throw Error("internal error: the propagated coloring is inconsistent on an arc");
   for (auto& v : arc)
     if (v < 0) throw Error("internal error: an arc received no color");

@@ -30,9 +30,12 @@
 //              loops that pass no end (possible only in sums) come last, by their lowest crossing.
 //   edges      PD edges: the pieces of the oriented curve from one crossing to the next. Edge
 //              labels run 1, 2, ... consecutively along component 0, then component 1, ...; the
-//              first edge of a component is the one that ends at the first crossing met after its
-//              entry point (below). In a closure an edge may run through tangle ends and closure
-//              arcs (Edge::via lists them).
+//              first edge of a component is the one that runs through its entry end (ending at
+//              the first crossing met after it), or for a closed loop with no end the one that
+//              enters its lowest-numbered crossing at the upper corner of the rule below. In a
+//              closure an edge may run through tangle ends and closure arcs (Edge::via lists
+//              them); in the open tangle the first and last edges of a strand start and end at
+//              the tangle's ends.
 //   arcs       the over-arcs (Fox's arcs): maximal pieces of the curve from one under-passage to the
 //              next, each a run of consecutive edges. Arcs are numbered in the order of their first
 //              edge, where an arc's first edge is the one leaving an under-passage (or, in the open
@@ -288,9 +291,11 @@ class Diagram {
 };
 
 /// Integer end colors of the diagram's tangle (closure ignored) from its Fox coloring over Z with
-/// seed colors 0 and 1 (Kauffman–Lambropoulou 2004, second proof of Conway's theorem); they
-/// satisfy nw + se = ne + sw. For a sum the colors are those of the coloring whose leftmost
-/// summand's seed has colors 0 and 1, scaled to integers. Throws DomainError if the tangle's
+/// seed colors 0 and 1. The colors grow like the fraction's numerator and denominator, so this is
+/// quadratic in the number of crossings for long sequences (twist_value is the fast way to F).
+/// (Kauffman–Lambropoulou 2004, second proof of Conway's theorem.) They
+/// satisfy nw + se = ne + sw, and nw = 0. For a sum: the coloring that is not constant, with
+/// nw = 0 and the other three coprime (unique up to sign). Throws DomainError if the tangle's
 /// colorings do not determine the ends (a sum whose parts do not glue, e.g. [∞] + [∞]).
 [[nodiscard]] EndColors end_colors(const Diagram& d);
 
