@@ -81,6 +81,10 @@ TEST(Counts, SmallCrossingNumbers) {
   EXPECT_EQ(count_two_bridge(6).amphichiral_knots, 1);
   EXPECT_EQ(count_two_bridge(7).knots_with_mirrors, 14);
   EXPECT_EQ(count_two_bridge(5).links, 1);
+  // Amphichiral 2-bridge knots in the same table (from memory): 8_3, 8_9, 8_12 and
+  // 10_17, 10_33, 10_37, 10_43, 10_45.
+  EXPECT_EQ(count_two_bridge(8).amphichiral_knots, 3);
+  EXPECT_EQ(count_two_bridge(10).amphichiral_knots, 5);
   for (i64 n = 0; n <= 30; ++n) {
     EXPECT_EQ(count_rational_tangles(n), n == 0 ? Integer(2) : Integer(1) << static_cast<unsigned>(n));
   }
