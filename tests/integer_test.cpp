@@ -69,6 +69,8 @@ Integer gmp_fdiv_r(const Integer& a, const Integer& b) {
 
 }  // namespace
 
+// Each checked operation succeeds exactly when the exact (GMP) result fits in int64, and then
+// writes that result.
 TEST(WordArithmetic, CheckedOpsAgreeWithGmp) {
   for (int i = 0; i < fp::testing::iterations(200000); ++i) {
     const std::int64_t a = corner64(), b = corner64(), c = corner64();
@@ -101,6 +103,7 @@ TEST(WordArithmetic, CheckedOpsAgreeWithGmp) {
   }
 }
 
+// Unsigned sums and products on both sides of 2^64.
 TEST(WordArithmetic, UnsignedChecksCrossTwoToThe64) {
   for (int i = 0; i < fp::testing::iterations(100000); ++i) {
     const std::uint64_t a = corner_u64(), b = corner_u64();
@@ -117,6 +120,7 @@ TEST(WordArithmetic, UnsignedChecksCrossTwoToThe64) {
   }
 }
 
+// Floor rounding against mpz_fdiv_q / mpz_fdiv_r, signs in all four combinations.
 TEST(WordArithmetic, FloorDivisionAgreesWithGmp) {
   for (int i = 0; i < fp::testing::iterations(200000); ++i) {
     const std::int64_t a = corner64(), b = corner64();
@@ -160,6 +164,7 @@ TEST(IntegerHelpers, FloorAndConversionAgainstGmp) {
   }
 }
 
+// a·b mod m with the product formed in 128 bits, against the exact product reduced by GMP.
 TEST(WordArithmetic, MulmodThroughInt128) {
   for (int i = 0; i < fp::testing::iterations(100000); ++i) {
     const std::uint64_t a = corner_u64(), b = corner_u64(), m = corner_u64() | 1;
@@ -175,6 +180,7 @@ TEST(WordArithmetic, MulmodThroughInt128) {
   }
 }
 
+// gcd, Bézout cofactors and modular inverses against GMP and against brute force.
 TEST(WordArithmetic, GcdExtendedGcdAndInverse) {
   for (int i = 0; i < fp::testing::iterations(100000); ++i) {
     const std::int64_t a = corner64(), b = corner64();

@@ -49,7 +49,6 @@ __extension__ using u128 = unsigned __int128;
   std::int64_t t;
   return !__builtin_mul_overflow(a, b, &t) && !__builtin_add_overflow(t, c, &out);
 }
-/// The same checks on unsigned words.
 [[nodiscard]] inline bool try_add(std::uint64_t a, std::uint64_t b, std::uint64_t& out) noexcept {
   return !__builtin_add_overflow(a, b, &out);
 }
@@ -151,8 +150,6 @@ struct ExtendedGcd {
   if (e.g != 1) return std::nullopt;
   return mod_floor(e.s, m);
 }
-
-// ---- crossing between words and Integer ----
 
 /// The mpz behind an Integer (for GMP calls that Boost does not wrap).
 [[nodiscard]] inline mpz_srcptr mpz(const Integer& x) noexcept { return x.backend().data(); }
