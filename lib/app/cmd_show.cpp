@@ -6,6 +6,7 @@
 
 #include "command.hpp"
 #include "fourplat/algebraic.hpp"
+#include "fourplat/diagram.hpp"
 #include "fourplat/parse.hpp"
 #include "fourplat/two_bridge.hpp"
 #include "output.hpp"
@@ -33,6 +34,14 @@ std::string connectivity_text(const Fraction& f) {
   return "like [1]: NW-SE and NE-SW joined";
 }
 
+/// The coloring fraction (Kauffman–Lambropoulou 2004) read off the tangle's own diagram: an
+/// independent check of the continued-fraction value; nullopt when the diagram is too large.
+std::optional<Fraction> diagram_fraction(const RationalTangle& t) {
+  const TangleSum one({t});
+  if (diagram_crossings(one, false) > kMaxToolCrossings) return std::nullopt;
+  return coloring_fraction(draw_diagram(one, DiagramClosure::none, false));
+}
+
 void show_rational(const std::string& input, const RationalTangle& t, bool json) {
   Output& out = Output::get();
   const TwoBridgeLink n = closure(t, Closure::numerator), d = closure(t, Closure::denominator);
@@ -47,6 +56,8 @@ void show_rational(const std::string& input, const RationalTangle& t, bool json)
     j["canonical_twists"] = to_string(t.canonical_twists());
     j["crossing_number"] = integer_json(t.crossing_number());
     j["connectivity"] = connectivity(t.fraction());
+    const std::optional<Fraction> cf = diagram_fraction(t);
+    j["coloring_fraction"] = cf ? Json(to_string(*cf)) : Json(nullptr);
     j["numerator"] = link_json(n, &on);
     j["denominator"] = link_json(d, &od);
     out.write(j.dump(-1, ' ', false, Json::error_handler_t::replace));
@@ -62,6 +73,10 @@ void show_rational(const std::string& input, const RationalTangle& t, bool json)
   line("twists (canonical)", to_string(t.canonical_twists()) + "  (Kauffman-Lambropoulou form)");
   line("crossing number", t.crossing_number().str());
   line("connectivity", connectivity_text(t.fraction()));
+  if (const std::optional<Fraction> cf = diagram_fraction(t)) {
+    line("coloring fraction", to_string(*cf) + (*cf == t.fraction() ? "  (from the diagram's end colors: agrees)"
+                                                                    : "  (from the diagram's end colors: DISAGREES)"));
+  }
   out.write("numerator closure N(T)\n");
   print_link(n, &on, "  ");
   out.write("denominator closure D(T)\n");
