@@ -84,10 +84,13 @@ std::vector<Integer> oriented_classes(const Integer& alpha, const Integer& beta,
 
 }  // namespace
 
+// [k 2] = 2 + 1/k = (2k+1)/k; [n] = n; [a b] = b + 1/a = (ab+1)/a (Conway's order).
 TwistSequence twist_knot_twists(const Integer& k) { return TwistSequence{{k, Integer(2)}}; }
 TwistSequence torus_twists(const Integer& n) { return TwistSequence{{n}}; }
 TwistSequence double_twist_twists(const Integer& a, const Integer& b) { return TwistSequence{{a, b}}; }
 
+// A small hand parser: '[' then terms separated by spaces or one comma, then ']'. Each error
+// names the character where what was expected did not come.
 std::vector<TermRange> parse_pattern(std::string_view s) {
   std::size_t i = 0;
   auto skip_space = [&] {
@@ -147,6 +150,7 @@ bool for_each_pattern(std::span<const TermRange> pattern,
   if (pattern_size(pattern) > Integer(UINT64_MAX)) {
     throw LimitError("the pattern stands for more than 2^64 sequences");
   }
+  // The size check above keeps the loop finite in practice; the sink may stop it any time.
   std::vector<Integer> cur;
   cur.reserve(pattern.size());
   for (const TermRange& r : pattern) cur.push_back(r.lo);
@@ -203,6 +207,8 @@ LinkClass sample_two_bridge(std::int64_t n, const EnumerationOptions& options, R
                                                                                  : "knot or link") +
                       " has crossing number " + std::to_string(n));
   }
+  // Uniformity (docs/enumeration.md §6): a word is uniform; a class of s words keeps each with
+  // probability least_orbit/s, so every class weighs least_orbit·2^−m per trial.
   const bool want_knots = options.components != ComponentFilter::links;
   const bool want_links = options.components != ComponentFilter::knots;
   if (n == 0) {  // the unknot b(1,0) and the unlink b(0,1)
@@ -234,6 +240,7 @@ LinkClass sample_two_bridge(std::int64_t n, const EnumerationOptions& options, R
     orbit.erase(std::unique(orbit.begin(), orbit.end()), orbit.end());
     // Accept with probability least_orbit / |orbit| (a ratio of 1 or 2).
     if (static_cast<int>(orbit.size()) > least_orbit && bits.next()) continue;
+    // Accepted: the class's fields, as the walk's leaf computes them (lib/enumerate.cpp).
     LinkClass c;
     c.crossings = n;
     c.components = knot ? 1 : 2;
@@ -254,6 +261,7 @@ LinkClass sample_two_bridge(std::int64_t n, const EnumerationOptions& options, R
       }
       q = ori[j];
     }
+    // The drawing fraction: p/q, or −p/(2p−q) for an oriented form above p.
     const Integer r = q < beta ? q : q - beta;
     c.canonical_q = (r == delta || r == alpha) ? cq : cq_mirror;
     if (q < beta) {

@@ -38,6 +38,7 @@ TwoBridgeCounts count_by_walking(int n) {
         if (it.amphichiral) (it.components == 1 ? amph_k : amph_l) += 1;
         return !InterruptGuard::interrupted();
       });
+      // Amphichiral classes are their own mirror images: the walk up to mirror counts them.
       if (!ori) {
         (mir ? c.knots_with_mirrors : c.knots) = knots;
         (mir ? c.links_with_mirrors : c.links) = links;
@@ -77,6 +78,7 @@ void run(const Options& o) {
               "knots", "links", "knots_mir", "links_or", "links_mir", "links_or_mir", "amph_knots",
               "amph_links", "tangles");
   }
+  // Key order of the JSON objects: the fixed keys first, then the additions.
   for (std::int64_t n = lo; n <= hi; ++n) {
     const TwoBridgeCounts c = o.by_enumeration ? count_by_walking(static_cast<int>(n)) : count_two_bridge(n);
     const std::array<const Integer*, 9> v{&c.knots, &c.links, &c.knots_with_mirrors, &c.links_oriented,

@@ -39,12 +39,15 @@ void run(const Options& o) {
   if (o.tangles && (o.knots || o.links || o.mirrors || o.oriented)) {
     throw Error("--tangles lists every fraction: --knots, --links, --mirrors and --oriented do not apply");
   }
+  // Everything is checked before the first row, so a bad option never leaves partial output.
   const Shard shard = o.shard.empty() ? Shard{} : parse_shard(o.shard);
   RowWriter writer(o.listing, select_fields(o.listing.fields, o.tangles ? kTangleFields : kLinkFields),
                    make_context(o.listing));
   writer.filters = make_filters(o.listing, std::nullopt);
   InterruptGuard guard;
   ProgressBar bar("enumerate");
+  // One Row is reused for every item; the sink returns false once Ctrl-C was pressed, which
+  // stops the walk after a complete line.
   Row row;
   const int a = static_cast<int>(lo), b = static_cast<int>(hi);
   if (o.tangles) {
@@ -60,6 +63,7 @@ void run(const Options& o) {
       return writer.write(row);
     });
   } else {
+    // The component filter runs inside the walk (cheaper than a row filter).
     EnumerationOptions e;
     e.components = o.knots ? ComponentFilter::knots : o.links ? ComponentFilter::links : ComponentFilter::both;
     e.mirrors = o.mirrors;

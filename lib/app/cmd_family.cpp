@@ -44,6 +44,8 @@ class Members {
     e_.oriented = o.oriented;
   }
   // Returns false to stop (interrupted).
+  // The member's class through the big-integer path (members can be any size), its own twist
+  // sequence, and with --unique a set of the classes already listed.
   bool add(const TwistSequence& t) {
     const Fraction f = twist_value(t);
     const LinkClass c = link_class_of(f, e_);
@@ -82,6 +84,7 @@ void run(const Options& o) {
     if (o.crossings.empty()) throw Error("family sample and family tangles need --crossings N");
     const auto [n, n2] = parse_crossing_range(o.crossings, "--crossings");
     if (n != n2) throw Error("--crossings takes one crossing number here, got a range");
+    // One bit stream for the whole run: sample i depends on the seed and on i only.
     RandomBits bits(o.seed);
     Row row;
     EnumerationOptions e;
@@ -103,6 +106,7 @@ void run(const Options& o) {
     }
   } else {
     if (!o.crossings.empty()) writer.filters.crossings = parse_crossing_range(o.crossings, "--crossings");
+    // Iterates an integer range (any size) until the callback says stop.
     auto each = [&](const std::string& text, const char* what, auto&& f) {
       const auto [lo, hi] = parse_integer_range(text, what);
       for (Integer k = lo; k <= hi; ++k) {
@@ -187,6 +191,7 @@ void setup(CLI::App& app) {
       "  fourplat family sample --crossings 40 --knots --samples 5 --seed 7\n"
       "  fourplat family tangles --crossings 12 --samples 3");
   app.require_subcommand(1);
+  // One Options per subcommand, alive for the whole run (CLI11 keeps pointers into them).
   static std::shared_ptr<Options> twist, torus, dbl, pattern, sample, tangles;
   CLI::App* s = sub(app, "twist", "twist knots [k 2] = b(2k+1,k) for k in --range", Kind::twist, twist);
   s->add_option("--range", twist->range, "k from A..B (default 1..10)");

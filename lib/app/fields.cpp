@@ -23,6 +23,8 @@ namespace {
 
 // ---- cells ----
 
+// Integers keep a word-size fast path: fmt writes an int64 without allocating, while a big
+// value goes through GMP's conversion (and is marked so that JSON writes it as a string).
 void set_int(Cell& c, const Integer& x) {
   c.kind = Cell::integer;
   c.text.clear();
@@ -55,9 +57,12 @@ void set_link(Cell& c, const Integer& p, const Integer& q) {
   }
 }
 
+// x mod p in [0, p); p = 0 is the unlink b(0,1), whose q is 1 by convention.
 Integer mod_p(const Integer& x, const Integer& p) { return p == 0 ? Integer(1) : mod_floor(x, p); }
 
 // ---- the field table (each function reads the row only) ----
+// The order here is the order of --list-fields and of --fields all. A new invariant is one more
+// entry; set needs_twists when it reads Row::twists, so the generators fill them only then.
 
 const std::vector<FieldDef> kFields = {
     {"index", "position of the row in the output, from 1", false,
@@ -152,6 +157,7 @@ void append_csv(fmt::memory_buffer& out, const Cell& c) {
   out.push_back('"');
 }
 
+// The table is for people: yes/no for booleans, '-' for a missing value.
 std::string_view table_text(const Cell& c) {
   if (c.kind == Cell::boolean) return c.text == "true" ? "yes" : "no";
   if (c.kind == Cell::null) return "-";
@@ -165,8 +171,14 @@ std::size_t width_of(std::string_view s) {
   return n;
 }
 
+// A streamed table cannot know its widths: the first rows are held back to size the columns
+// (later, wider values push their row to the right).
 constexpr std::size_t kTableSizingRows = 200;
+// The buffer is written out at this size, always at a line boundary.
 constexpr std::size_t kFlushAt = std::size_t{1} << 16;
+
+// The handler only stores to a volatile sig_atomic_t, the one thing a handler may do safely; the
+// listing loop reads the flag after each row. Guards nest (count) and restore the old handlers.
 
 volatile std::sig_atomic_t g_interrupted = 0;
 struct sigaction g_old_int {}, g_old_term {};
@@ -178,6 +190,7 @@ extern "C" void on_interrupt(int) { g_interrupted = 1; }
 
 // ---- rows ----
 
+// Assignments into the reused Integers reuse their limbs: no allocation per row.
 void Row::set(const EnumeratedLink& it, bool oriented_listing) {
   tangle = false;
   oriented = oriented_listing;
@@ -208,6 +221,7 @@ void Row::set(const LinkClass& c, bool oriented_listing) {
   fraction_q = c.fraction_q;
   canonical_q = c.canonical_q;
   canonical_mirror_q = c.canonical_mirror_q;
+  // A family member's tangle may have more crossings than its closure ([1 1] closes to 0).
   const Fraction f(fraction_p, fraction_q);
   const Integer tc = twist_crossings(f);
   tangle_crossings = to_int64(tc).value_or(-1);
@@ -250,6 +264,7 @@ void Row::set_tangle(const Integer& fp, const Integer& fq, std::int64_t tangle_c
 
 const std::vector<FieldDef>& all_fields() { return kFields; }
 
+// Names are matched exactly; a repeated name is kept once, in its first place.
 std::vector<const FieldDef*> select_fields(std::string_view list, std::string_view defaults) {
   std::string text(list);
   if (text.empty()) text = defaults;
@@ -287,6 +302,8 @@ std::string fields_help() {
 
 // ---- filters ----
 
+// Colorability: b(p,q) has n·gcd(n,p) Fox n-colorings, so a non-trivial one exists iff
+// gcd(n,p) > 1 (common practice; MATH.md §3).
 bool Filters::accept(const Row& r) const {
   if (components && r.components != *components) return false;
   if (amphichiral && r.amphichiral != *amphichiral) return false;
@@ -368,6 +385,7 @@ RowWriter::~RowWriter() {
   }
 }
 
+// Rows that fail a filter are neither numbered nor counted.
 bool RowWriter::write(Row& r) {
   if (!filters.accept(r)) return !InterruptGuard::interrupted();
   ++rows_;
@@ -431,6 +449,7 @@ void RowWriter::emit_line(const std::vector<Cell>& cells) {
   if (out_.size() >= kFlushAt) flush_out(false);
 }
 
+// Fixes the column widths from the header and the held-back rows, then writes them all.
 void RowWriter::flush_table_widths() {
   widths_.assign(fields_.size(), 0);
   for (std::size_t i = 0; i < fields_.size(); ++i) {
@@ -515,6 +534,7 @@ ProgressBar::~ProgressBar() {
   if (drawn_) std::fputs("\r\033[K", stderr);
 }
 
+// Redraws at most five times a second; "\r" returns to the start of the line.
 void ProgressBar::update(double fraction) {
   if (!enabled_) return;
   const auto now = std::chrono::duration_cast<std::chrono::milliseconds>(
@@ -572,6 +592,7 @@ std::string bare_message(const ParseError& e) {
   return m.rfind("at character ", 0) == 0 && k != std::string::npos ? m.substr(k + 2) : m;
 }
 
+// The tool counts shards from 1 (part I of N), the library from 0.
 Shard parse_shard(std::string_view text) {
   const std::size_t slash = text.find('/');
   if (slash == std::string_view::npos) {
