@@ -1,6 +1,7 @@
 // fourplat count — how many 2-bridge knots and links have crossing number N, by the closed
 // formulas of counts.hpp (Ernst–Sumners 1987 for knots; the rest derived in docs/enumeration.md),
 // for any N; --by-enumeration walks the lists instead, as a cross-check.
+#include <algorithm>
 #include <array>
 #include <string>
 
@@ -73,10 +74,12 @@ void run(const Options& o) {
                                          "links_oriented", "links_with_mirrors",
                                          "links_oriented_with_mirrors", "amphichiral_knots",
                                          "amphichiral_links", "rational_tangles"};
+  // The text table has the JSON keys as its header; a column is as wide as its key or its
+  // widest value (big values are allowed to push the row).
+  const auto width = [&](std::size_t i) { return std::max<std::size_t>(std::string(keys[i]).size(), 6); };
   if (!o.json) {
-    out.print("{:>9} {:>12} {:>12} {:>12} {:>12} {:>12} {:>12} {:>10} {:>10} {:>14}\n", "crossings",
-              "knots", "links", "knots_mir", "links_or", "links_mir", "links_or_mir", "amph_knots",
-              "amph_links", "tangles");
+    for (std::size_t i = 0; i < keys.size(); ++i) out.print("{}{:>{}}", i ? "  " : "", keys[i], width(i));
+    out.write("\n");
   }
   // Key order of the JSON objects: the fixed keys first, then the additions.
   for (std::int64_t n = lo; n <= hi; ++n) {
@@ -91,9 +94,9 @@ void run(const Options& o) {
       out.write(j.dump());
       out.write("\n");
     } else {
-      out.print("{:>9} {:>12} {:>12} {:>12} {:>12} {:>12} {:>12} {:>10} {:>10} {:>14}\n", n, v[0]->str(),
-                v[1]->str(), v[2]->str(), v[3]->str(), v[4]->str(), v[5]->str(), v[6]->str(), v[7]->str(),
-                v[8]->str());
+      out.print("{:>{}}", n, width(0));
+      for (std::size_t i = 0; i < v.size(); ++i) out.print("  {:>{}}", v[i]->str(), width(i + 1));
+      out.write("\n");
     }
     if (InterruptGuard::interrupted()) break;
   }
