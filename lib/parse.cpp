@@ -366,6 +366,46 @@ Closure parse_closure(std::string_view text) {
   c.fail_here("a closure (numerator or denominator)");
 }
 
+namespace {
+/// One of the given names (exact, or in any ASCII case when `any_case`), as a whole input.
+/// to_string(T) must return a view of static text (const char* or std::string_view).
+template <typename T, std::size_t N>
+T parse_name(std::string_view text, const std::array<T, N>& values, std::string_view what, bool any_case) {
+  Cursor c(text);
+  c.skip_space();
+  const std::size_t start = c.pos();
+  for (T v : values) {
+    const std::string_view name = to_string(v);
+    bool match = start + name.size() <= text.size();
+    for (std::size_t k = 0; match && k < name.size(); ++k) {
+      const char a = text[start + k], b = name[k];
+      match = a == b || (any_case && (a | 0x20) == (b | 0x20) && ((b | 0x20) >= 'a' && (b | 0x20) <= 'z'));
+    }
+    if (match) {
+      c.seek(start + name.size());
+      c.finish();
+      return v;
+    }
+  }
+  c.fail_here(what);
+}
+}  // namespace
+
+Corner parse_corner(std::string_view text) {
+  return parse_name(text, std::array{Corner::nw, Corner::ne, Corner::sw, Corner::se},
+                    "a corner (NW, NE, SW or SE)", true);
+}
+
+DiagramClosure parse_diagram_closure(std::string_view text) {
+  return parse_name(text, std::array{DiagramClosure::numerator, DiagramClosure::denominator, DiagramClosure::none},
+                    "a closure (numerator, denominator or none)", false);
+}
+
+BoxKind parse_box_kind(std::string_view text) {
+  return parse_name(text, std::array{BoxKind::horizontal, BoxKind::vertical}, "a box kind (horizontal or vertical)",
+                    false);
+}
+
 std::optional<FractionWord> parse_fraction_word(std::string_view s) noexcept {
   std::size_t i = 0;
   const std::size_t n = s.size();

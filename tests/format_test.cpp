@@ -99,3 +99,15 @@ TEST(Format, WidthFillAndAlignmentOnEveryType) {
   EXPECT_EQ(fmt::format("{:3}", Integer(123456)), "123456");
   EXPECT_THROW((void)fmt::format(fmt::runtime("{:d}"), Integer(1)), fmt::format_error);
 }
+
+TEST(Format, DiagramTypes) {
+  EXPECT_EQ(fmt::format("{}", fp::Corner::nw), "NW");
+  EXPECT_EQ(fmt::format("{:>4}", fp::Corner::se), "  SE");
+  EXPECT_EQ(fmt::format("{}", fp::DiagramClosure::none), "none");
+  EXPECT_EQ(fmt::format("{:<12}|", fp::DiagramClosure::denominator), "denominator |");
+  EXPECT_EQ(fmt::format("{}", fp::BoxKind::vertical), "vertical");
+  // The PD code of a made-up three-crossing code, in the trade's X[i,j,k,l] notation.
+  const fp::PdCode pd = {{4, 2, 5, 1}, {2, 6, 3, 5}, {6, 4, 1, 3}};
+  EXPECT_EQ(fmt::format("{}", pd), "X[4,2,5,1] X[2,6,3,5] X[6,4,1,3]");
+  EXPECT_EQ(fmt::format("{}", pd), fp::to_string(pd));
+}

@@ -218,6 +218,20 @@ TEST(ParseLink, KindsAndClosures) {
   EXPECT_THROW((void)fp::parse_closure("num"), ParseError);
 }
 
+TEST(ParseDiagramNames, RoundTripAndErrors) {
+  for (fp::Corner c : {fp::Corner::nw, fp::Corner::ne, fp::Corner::sw, fp::Corner::se}) {
+    EXPECT_EQ(fp::parse_corner(fmt::format("{}", c)), c);
+  }
+  EXPECT_EQ(fp::parse_corner(" se "), fp::Corner::se);
+  for (fp::DiagramClosure c : {fp::DiagramClosure::numerator, fp::DiagramClosure::denominator, fp::DiagramClosure::none}) {
+    EXPECT_EQ(fp::parse_diagram_closure(fmt::format("{}", c)), c);
+  }
+  EXPECT_EQ(fp::parse_box_kind(fmt::format("{}", fp::BoxKind::vertical)), fp::BoxKind::vertical);
+  EXPECT_EQ(error_position([](const std::string& s) { return fp::parse_corner(s); }, "N"), 0);
+  EXPECT_EQ(error_position([](const std::string& s) { return fp::parse_corner(s); }, "NWX"), 2);
+  EXPECT_EQ(error_position([](const std::string& s) { return fp::parse_diagram_closure(s); }, "nonex"), 4);
+}
+
 TEST(ParseFractionWord, FastPathAgreesWithTheFullParser) {
   EXPECT_FALSE(fp::parse_fraction_word("inf"));
   EXPECT_FALSE(fp::parse_fraction_word("1/0"));

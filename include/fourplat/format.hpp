@@ -7,6 +7,9 @@
 //   fmt::format("{}", TwoBridgeLink(7, 3))       "b(7,3)"
 //   fmt::format("{}", sum)                       "3/5 + [2 1]"
 //   fmt::format("{}", LinkKind::torus)           "torus";  Closure::numerator: "numerator"
+//   fmt::format("{}", Corner::nw)                "NW";  DiagramClosure::none: "none";  BoxKind
+//   fmt::format("{}", diagram.pd_code())         "X[4,2,5,1] X[2,6,3,5] X[6,4,1,3]"  (PdCode, the
+//                                                 form parse_pd of fourplat/pd.hpp reads back)
 // Every formatter prints exactly the text that the matching parser of fourplat/parse.hpp reads
 // back, and accepts the standard string format specification ([[fill]align][width][.precision]),
 // as fmt 9 allows by specialising fmt::formatter and inheriting formatter<string_view>.
@@ -21,6 +24,7 @@
 
 #include "fourplat/algebraic.hpp"
 #include "fourplat/continued_fraction.hpp"
+#include "fourplat/diagram.hpp"
 #include "fourplat/fraction.hpp"
 #include "fourplat/integer.hpp"
 #include "fourplat/parse.hpp"
@@ -61,3 +65,14 @@ template <>
 struct fmt::formatter<fourplat::LinkKind> : fourplat::detail::TextFormatter<fourplat::LinkKind> {};
 template <>
 struct fmt::formatter<fourplat::Closure> : fourplat::detail::TextFormatter<fourplat::Closure> {};
+template <>
+struct fmt::formatter<fourplat::Corner> : fourplat::detail::TextFormatter<fourplat::Corner> {};
+template <>
+struct fmt::formatter<fourplat::DiagramClosure>
+    : fourplat::detail::TextFormatter<fourplat::DiagramClosure> {};
+template <>
+struct fmt::formatter<fourplat::BoxKind> : fourplat::detail::TextFormatter<fourplat::BoxKind> {};
+/// PdCode is std::vector<std::array<std::int64_t, 4>>: this formatter prints every such vector as
+/// a PD code (a full specialisation, so it wins over fmt/ranges.h where that is included).
+template <>
+struct fmt::formatter<fourplat::PdCode> : fourplat::detail::TextFormatter<fourplat::PdCode> {};

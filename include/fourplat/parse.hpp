@@ -8,6 +8,7 @@
 //                [2 1 1 2]   [3,-2]   [ 3 , -2 ]
 //   sum          tangles joined by +:   3/5 + 2/7   [2 1] + [3]   1/2+1/3+1/5
 //   link         Schubert's b(p,q), any coprime integers (reduced to Schubert form):  b(7,3)
+// (PD codes have their own parser, parse_pd in fourplat/pd.hpp.)
 // Leading and trailing whitespace is ignored everywhere; anything else after a complete value is
 // an error. Each parser accepts exactly the text fourplat prints for its type (the fmt formatters
 // of fourplat/format.hpp and the to_string functions), and more.
@@ -26,6 +27,7 @@
 
 #include "fourplat/algebraic.hpp"
 #include "fourplat/continued_fraction.hpp"
+#include "fourplat/diagram.hpp"
 #include "fourplat/fraction.hpp"
 #include "fourplat/integer.hpp"
 #include "fourplat/tangle.hpp"
@@ -53,6 +55,13 @@ namespace fourplat {
 /// "numerator" or "denominator" (as to_string(Closure) prints them).
 [[nodiscard]] Closure parse_closure(std::string_view text);
 
+/// "NW", "NE", "SW" or "SE" (as to_string(Corner) prints them; lower case accepted).
+[[nodiscard]] Corner parse_corner(std::string_view text);
+/// "numerator", "denominator" or "none" (as to_string(DiagramClosure) prints them).
+[[nodiscard]] DiagramClosure parse_diagram_closure(std::string_view text);
+/// "horizontal" or "vertical".
+[[nodiscard]] BoxKind parse_box_kind(std::string_view text);
+
 /// A fraction p/q in machine words, reduced with q > 0 (q = 0 is never returned).
 struct FractionWord {
   std::int64_t p = 0;
@@ -75,6 +84,10 @@ struct FractionWord {
 /// "numerator" or "denominator".
 [[nodiscard]] inline std::string_view to_string(Closure c) noexcept {
   return c == Closure::numerator ? "numerator" : "denominator";
+}
+/// "horizontal" or "vertical".
+[[nodiscard]] inline std::string_view to_string(BoxKind k) noexcept {
+  return k == BoxKind::horizontal ? "horizontal" : "vertical";
 }
 
 }  // namespace fourplat

@@ -87,6 +87,12 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     exercise(text, characters, fp::parse_closure, [&](fp::Closure c) {
       if (fp::parse_closure(fmt::format("{}", c)) != c) failure("closure round trip", text);
     });
+    exercise(text, characters, fp::parse_corner, [&](fp::Corner c) {
+      if (fp::parse_corner(fmt::format("{}", c)) != c) failure("corner round trip", text);
+    });
+    exercise(text, characters, fp::parse_diagram_closure, [&](fp::DiagramClosure c) {
+      if (fp::parse_diagram_closure(fmt::format("{}", c)) != c) failure("diagram closure round trip", text);
+    });
   } catch (const std::exception& e) {
     failure(e.what(), text);  // anything but ParseError breaks the contract of parse.hpp
   }
