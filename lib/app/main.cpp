@@ -49,6 +49,13 @@ int main(int argc, char** argv) {
   for (const auto& c : fourplat::app::commands()) {
     CLI::App* sub = app.add_subcommand(c.name, c.summary);
     c.setup(*sub);
+    // The command list shows each command's one-line summary; a longer description set by a
+    // command's setup goes above its footer in its own --help instead.
+    if (sub->get_description() != c.summary) {
+      const std::string footer = sub->get_footer();
+      sub->footer(sub->get_description() + (footer.empty() ? "" : "\n\n" + footer));
+      sub->description(c.summary);
+    }
   }
 
   // CLI11 reads a word "[a,b]" as a list and splits it; a leading space keeps a twist sequence

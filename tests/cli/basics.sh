@@ -67,4 +67,24 @@ expect_one_error_line "huge bad tangle"
 CHECKS=$((CHECKS + 1))
 (( ${#ERR} < 400 )) || fail "huge bad tangle: error line is ${#ERR} characters long"
 
+# Every command the tool lists is documented in the tool guide and the manual page, and every key
+# that classify --json prints is in the guide.
+if [[ -n "${FOURPLAT_SOURCE_DIR:-}" ]]; then
+  run --help
+  commands=$(sed -n '/^Subcommands:/,$p' <<<"$OUT" | sed -n 's/^  \([a-z]*\)  .*/\1/p')
+  CHECKS=$((CHECKS + 1))
+  [[ $(wc -w <<<"$commands") -ge 7 ]] || fail "--help lists too few commands: $commands"
+  for cmd in $commands; do
+    CHECKS=$((CHECKS + 1))
+    grep -q "^## .*$cmd" "$FOURPLAT_SOURCE_DIR/docs/tool.md" || fail "docs/tool.md has no section for '$cmd'"
+    CHECKS=$((CHECKS + 1))
+    grep -q "^\\.B[RI]* \"*$cmd" "$FOURPLAT_SOURCE_DIR/docs/fourplat.1" || fail "docs/fourplat.1 does not list '$cmd'"
+  done
+  run classify --json 3 '1/2 + 1/3 + 1/5'
+  for key in $(python3 -c 'import json, sys; print(" ".join(sorted({k for l in sys.stdin if l.strip() for k in json.loads(l)})))' <<<"$OUT"); do
+    CHECKS=$((CHECKS + 1))
+    grep -q "\`$key\`" "$FOURPLAT_SOURCE_DIR/docs/tool.md" || fail "docs/tool.md does not document the classify key '$key'"
+  done
+fi
+
 finish
