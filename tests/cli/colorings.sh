@@ -72,7 +72,7 @@ PY
 }
 for t in '[3]' '[2 2]' '[2 1 1 2]' '[3 1 4 1 5]' '17/7' '[2 -3 4]' '3/5 + 2/7' '1/3 + 1/3 + 1/3'; do
   for closure in numerator denominator; do
-    for n in 3 9 13; do check_fox "$t" "$closure" "$n"; done
+    for n in 3 13; do check_fox "$t" "$closure" "$n"; done
   done
 done
 check_fox '[2 1 1 2]' numerator 13 --canonical
