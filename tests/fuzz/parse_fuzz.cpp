@@ -81,6 +81,9 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     exercise(text, characters, fp::parse_two_bridge, [&](const fp::TwoBridgeLink& l) {
       if (!(fp::parse_two_bridge(fmt::format("{}", l)) == l)) failure("link round trip", text);
     });
+    exercise(text, characters, fp::parse_oriented_two_bridge, [&](const fp::OrientedTwoBridgeLink& l) {
+      if (!(fp::parse_oriented_two_bridge(fmt::format("{}", l)) == l)) failure("oriented link round trip", text);
+    });
     exercise(text, characters, fp::parse_link_kind, [&](fp::LinkKind k) {
       if (fp::parse_link_kind(fmt::format("{}", k)) != k) failure("kind round trip", text);
     });
