@@ -5,6 +5,8 @@
 // long digit strings by divide and conquer (subquadratic).
 #include "fourplat/parse.hpp"
 
+#include "detail/word.hpp"  // binary gcd on words (Stein 1967)
+
 #include <gmp.h>
 
 #include <array>
@@ -257,20 +259,6 @@ std::uint64_t magnitude(std::int64_t x) noexcept {
   return x < 0 ? std::uint64_t{0} - static_cast<std::uint64_t>(x) : static_cast<std::uint64_t>(x);
 }
 
-/// Stein's binary gcd (shifts and subtractions, no division): about three times faster than
-/// Euclid's algorithm on random 62-bit words, which matters to batch classification.
-std::uint64_t binary_gcd(std::uint64_t a, std::uint64_t b) noexcept {
-  if (a == 0) return b;
-  if (b == 0) return a;
-  const int shift = __builtin_ctzll(a | b);
-  a >>= __builtin_ctzll(a);
-  do {
-    b >>= __builtin_ctzll(b);
-    if (a > b) std::swap(a, b);
-    b -= a;
-  } while (b != 0);
-  return a << shift;
-}
 
 }  // namespace
 
@@ -447,7 +435,7 @@ std::optional<FractionWord> parse_fraction_word(std::string_view s) noexcept {
     p = -p;
     q = -q;
   }
-  const auto g = static_cast<std::int64_t>(binary_gcd(magnitude(p), static_cast<std::uint64_t>(q)));
+  const auto g = static_cast<std::int64_t>(detail::gcd(magnitude(p), static_cast<std::uint64_t>(q)));
   return FractionWord{p / g, q / g};  // g ≥ 1 since q ≠ 0
 }
 
